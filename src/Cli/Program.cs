@@ -1,0 +1,3 @@
+using MotorLang.Cli;
+
+return CommandLine.Run(args, Console.Out, Console.Error);

@@ -1,0 +1,60 @@
+using System.Collections.Immutable;
+using MotorLang.Parser.Diagnostics;
+using MotorLang.Parser.Model;
+using MotorLang.Parser.Statements;
+using MotorLang.Parser.Syntax;
+using MotorLang.Parser.Text;
+using MotorLang.Parser.Values;
+
+namespace MotorLang.Parser;
+
+/// <summary>The result of parsing one document: the lossless tree, the model and every diagnostic.</summary>
+public sealed record ParseResult(SyntaxTree Tree, MotorList Model, ImmutableArray<Diagnostic> Diagnostics)
+{
+    public bool HasErrors => Diagnostics.Any(d => d.Severity == Severity.Error);
+}
+
+/// <summary>
+/// Text → lines → statements → blocks → model. Never throws on any input: each problem becomes a
+/// diagnostic on its own line and parsing goes on with the next line.
+/// </summary>
+public static class DocumentParser
+{
+    /// <summary>Documents above this size get one diagnostic instead of a parse (about 128 MB of UTF-16).</summary>
+    public const int MaxChars = 64 * 1024 * 1024;
+
+    public static ParseResult Parse(string text)
+    {
+        var diagnostics = new List<Diagnostic>();
+        var hasBom = text.Length > 0 && text[0] == '\uFEFF';
+        var start = hasBom ? 1 : 0;
+
+        if (text.Length > MaxChars)
+        {
+            diagnostics.Add(new Diagnostic(SyntaxCodes.FileTooLarge, Severity.Error, SourceRange.OnLine(0, 0, 0),
+                $"the document is {text.Length / (1024 * 1024)} M characters; the limit is {MaxChars / (1024 * 1024)} M, so it was not read"));
+            return Unreadable(text, hasBom, diagnostics);
+        }
+
+        if (text.AsSpan().IndexOf('\0') is var nul and >= 0)
+        {
+            diagnostics.Add(new Diagnostic(SyntaxCodes.BinaryContent, Severity.Error, SourceRange.OnLine(0, 0, 0),
+                $"this looks like a binary file (a NUL character at offset {nul}); a motor list is UTF-8 text"));
+            return Unreadable(text, hasBom, diagnostics);
+        }
+
+        var lines = LineScanner.Scan(text, start, diagnostics);
+        var model = new StructureBuilder(new StatementParser(new ValueReader(), diagnostics), diagnostics).Build(lines);
+        var sorted = diagnostics.OrderBy(d => d.Range.Start).ToImmutableArray();
+        return new ParseResult(new SyntaxTree(text, hasBom, lines, sorted), model, sorted);
+    }
+
+    private static ParseResult Unreadable(string text, bool hasBom, List<Diagnostic> diagnostics)
+    {
+        // Keep the text as one opaque line so printing the tree still gives the input back.
+        var body = hasBom ? text[1..] : text;
+        var line = new SyntaxLine(0, 0, body, "", 0, false, [], null, inConflict: false) { IsBroken = true };
+        var diags = diagnostics.ToImmutableArray();
+        return new ParseResult(new SyntaxTree(text, hasBom, [line], diags), new MotorList(null, [], new(StringComparer.OrdinalIgnoreCase)), diags);
+    }
+}

@@ -1,0 +1,147 @@
+using MotorLang.Parser.Statements;
+using MotorLang.Parser.Values;
+using MotorLang.Sizing.Domain;
+
+namespace MotorLang.Parser.Model;
+
+/// <summary>
+/// A project, feeder, motor or load: its header statement and the statements written directly
+/// under it, by keyword. Values are read from the statements on demand, so the model keeps one
+/// copy of each fact and every value keeps its source range.
+/// </summary>
+public abstract class BlockNode
+{
+    private readonly Dictionary<string, Statement> _statements = new(StringComparer.OrdinalIgnoreCase);
+
+    protected BlockNode(Statement header, BlockNode? parent)
+    {
+        Header = header;
+        Parent = parent;
+        LastLine = header.Line.Index;
+        LastOwnLine = header.Line.Index;
+    }
+
+    public Statement Header { get; }
+
+    public BlockNode? Parent { get; }
+
+    /// <summary>The statements of this block other than its header, by keyword.</summary>
+    public IReadOnlyDictionary<string, Statement> Statements => _statements;
+
+    /// <summary>The last line that belongs to the block, children included.</summary>
+    public int LastLine { get; internal set; }
+
+    /// <summary>The last line of the header or of one of the block's own statements (not children's).</summary>
+    public int LastOwnLine { get; internal set; }
+
+    /// <summary>The indentation the block's own statements use, or null when it has none yet.</summary>
+    public int? ChildIndent { get; internal set; }
+
+    /// <summary>Adds a statement; returns the earlier one when the keyword was already given.</summary>
+    internal Statement? Add(Statement s)
+    {
+        if (_statements.TryGetValue(s.Keyword, out var earlier)) return earlier;
+        _statements[s.Keyword] = s;
+        return null;
+    }
+
+    /// <summary>An argument of the header or of one of this block's statements.</summary>
+    public Located<T>? Get<T>(string keyword, string arg)
+    {
+        var statement = string.Equals(keyword, Header.Keyword, StringComparison.OrdinalIgnoreCase)
+            ? Header
+            : _statements.GetValueOrDefault(keyword);
+        return statement?.Arg(arg) is { Value: T value } a ? new Located<T>(value, a.Range) : null;
+    }
+
+    /// <summary>An argument's text as the formatter writes it (e.g. the insulation name).</summary>
+    public Located<string>? GetText(string keyword, string arg) =>
+        (string.Equals(keyword, Header.Keyword, StringComparison.OrdinalIgnoreCase) ? Header : _statements.GetValueOrDefault(keyword))
+            ?.Arg(arg) is { } a ? new Located<string>(a.Canonical, a.Range) : null;
+
+    public bool Has(string keyword) => _statements.ContainsKey(keyword);
+
+    // Installation settings, as written on this block only (inheritance is resolved by analysis).
+    public Located<Quantity>? Ambient => Get<Quantity>("ambient", "temperature");
+    public Located<ConductorMaterial>? Material => Get<ConductorMaterial>("conductor", "material");
+    public Located<int>? InsulationRating => Get<int>("conductor", "insulation");
+    public Located<string>? Insulation => GetText("conductor", "insulation");
+    public Located<Quantity>? Termination => Get<Quantity>("conductor", "termination");
+    public Located<RacewayType>? Raceway => Get<RacewayType>("raceway", "type");
+    public Located<int>? CurrentCarrying => Get<int>("ccc", "count");
+    public Located<Quantity>? BranchDropLimit => Get<Quantity>("drop-limit", "branch");
+    public Located<Quantity>? TotalDropLimit => Get<Quantity>("drop-limit", "total");
+    public Located<decimal>? PowerFactor => Get<decimal>("power-factor", "value");
+    public Located<string>? CodeEdition => Get<string>("code", "edition");
+}
+
+public sealed class ProjectNode(Statement header) : BlockNode(header, null)
+{
+    public Located<string>? Name => Get<string>("project", "name");
+}
+
+/// <summary>Circuit attributes shared by feeders and motors.</summary>
+public abstract class CircuitNode(Statement header, BlockNode? parent) : BlockNode(header, parent)
+{
+    public abstract string Keyword { get; }
+    public Located<string>? Tag => Get<string>(Keyword, "tag");
+    public Located<string>? Description => Get<string>(Keyword, "description");
+    public Located<Quantity>? Length => Get<Quantity>("length", "length");
+    public Located<WireSpec>? Wire => Get<WireSpec>("wire", "size");
+    public Located<WireSpec>? Ground => Get<WireSpec>("ground", "size");
+    public Located<ProtectiveDevice>? Protection => Get<ProtectiveDevice>("protection", "device");
+    public Located<Quantity>? ProtectionRating => Get<Quantity>("protection", "rating");
+}
+
+public sealed class FeederNode(Statement header, ProjectNode? project) : CircuitNode(header, project)
+{
+    private readonly List<MotorNode> _motors = [];
+    private readonly List<LoadNode> _loads = [];
+
+    public override string Keyword => "feeder";
+    public Located<Quantity>? Voltage => Get<Quantity>("feeder", "voltage");
+    public Located<Phases>? Phases => Get<Phases>("feeder", "phases");
+    public Located<string>? From => Get<string>("from", "source");
+    public IReadOnlyList<MotorNode> Motors => _motors;
+    public IReadOnlyList<LoadNode> Loads => _loads;
+
+    internal void Add(MotorNode m) => _motors.Add(m);
+    internal void Add(LoadNode l) => _loads.Add(l);
+}
+
+public sealed class MotorNode(Statement header, FeederNode feeder) : CircuitNode(header, feeder)
+{
+    public override string Keyword => "motor";
+    public FeederNode Feeder => feeder;
+    public Located<Quantity>? Power => Get<Quantity>("motor", "power");
+    public Located<Quantity>? RatedVoltage => Get<Quantity>("motor", "voltage");
+    public Located<Phases>? Phases => Get<Phases>("motor", "phases");
+    public Located<Quantity>? Nameplate => Get<Quantity>("nameplate", "current");
+    public Located<decimal>? ServiceFactor => Get<decimal>("service-factor", "value");
+    public Located<Quantity>? TemperatureRise => Get<Quantity>("temp-rise", "temperature");
+    public Located<DesignLetter>? Design => Get<DesignLetter>("design", "letter");
+    public Located<CodeLetter>? CodeLetter => Get<CodeLetter>("code-letter", "letter");
+    public Located<MotorKind>? Kind => Get<MotorKind>("kind", "kind");
+    public Located<Efficiency>? Efficiency => Get<Efficiency>("efficiency", "class");
+    public Located<DutyKind>? Duty => Get<DutyKind>("duty", "duty");
+    public Located<Quantity>? DutyRating => Get<Quantity>("duty", "rating");
+    public Located<StartingMethod>? Starting => Get<StartingMethod>("starting", "method");
+    public Located<Quantity>? DriveInputCurrent => Get<Quantity>("starting", "input-current");
+    public Located<Quantity>? Overload => Get<Quantity>("overload", "setting");
+    public Located<Quantity>? DisconnectRating => Get<Quantity>("disconnect", "rating");
+    public Located<Quantity>? DisconnectPower => Get<Quantity>("disconnect", "power");
+    public Located<Quantity>? ControllerPower => Get<Quantity>("controller", "power");
+    public Located<int>? Quantity => Get<int>("quantity", "count");
+    public Located<string>? Like => Get<string>("like", "motor");
+    public Located<NameplateBasis>? Application => Get<NameplateBasis>("application", "kind");
+    public bool HardStart => Has("hard-start");
+}
+
+public sealed class LoadNode(Statement header, FeederNode feeder) : CircuitNode(header, feeder)
+{
+    public override string Keyword => "load";
+    public FeederNode Feeder => feeder;
+    public Located<Quantity>? Current => Get<Quantity>("load", "current");
+    public Located<Quantity>? ApparentPower => Get<Quantity>("load", "apparent-power");
+    public bool Continuous => Get<bool>("load", "duty")?.Value ?? false;
+}

@@ -1,0 +1,175 @@
+using MotorLang.Sizing.Domain;
+using static MotorLang.Parser.Statements.ArgKind;
+using static MotorLang.Parser.Statements.BlockKind;
+
+namespace MotorLang.Parser.Statements;
+
+/// <summary>
+/// Every keyword of the format and every enumerated word, in one table. The parser, the formatter,
+/// completion and docs/format.md all read from here, so a keyword is added in one place.
+/// </summary>
+public static class Keywords
+{
+    private static readonly BlockKind[] Settings = [Project, Feeder, Motor];
+
+    public static readonly WordChoice[] Editions = [new("NEC-2023", "NEC-2023", "NFPA 70, 2023 edition")];
+
+    public static readonly WordChoice[] Materials =
+    [
+        new("cu", ConductorMaterial.Copper, "copper", "copper"),
+        new("al", ConductorMaterial.Aluminum, "aluminum", "aluminum", "aluminium"),
+    ];
+
+    /// <summary>Insulation types with their temperature rating from Table 310.4(A).</summary>
+    public static readonly WordChoice[] Insulations =
+    [
+        new("TW", 60, "60 °C insulation"),
+        new("THW", 75, "75 °C insulation"),
+        new("THWN", 75, "75 °C insulation"),
+        new("XHHW", 75, "75 °C insulation (wet locations); 90 °C dry"),
+        new("THHN", 90, "90 °C insulation"),
+        new("THWN-2", 90, "90 °C insulation"),
+        new("XHHW-2", 90, "90 °C insulation"),
+    ];
+
+    public static readonly WordChoice[] Raceways =
+    [
+        new("EMT", RacewayType.Emt, "electrical metallic tubing (steel)"),
+        new("RMC", RacewayType.Rmc, "rigid metal conduit (steel)"),
+        new("PVC", RacewayType.Pvc, "rigid PVC conduit, schedule 40", "PVC-40"),
+    ];
+
+    public static readonly WordChoice[] Devices =
+    [
+        new("inverse-time-breaker", ProtectiveDevice.InverseTimeBreaker, "inverse-time circuit breaker"),
+        new("instantaneous-trip-breaker", ProtectiveDevice.InstantaneousTripBreaker, "instantaneous-trip circuit breaker (motor circuit protector)"),
+        new("dual-element-fuse", ProtectiveDevice.DualElementFuse, "dual-element (time-delay) fuse", "time-delay-fuse"),
+        new("non-time-delay-fuse", ProtectiveDevice.NonTimeDelayFuse, "non-time-delay fuse"),
+    ];
+
+    public static readonly WordChoice[] MotorKinds =
+    [
+        new("induction", MotorKind.Induction, "squirrel-cage induction motor (the default)", "squirrel-cage"),
+        new("wound-rotor", MotorKind.WoundRotor, "wound-rotor induction motor"),
+        new("synchronous", MotorKind.Synchronous, "synchronous motor, unity power factor"),
+        new("dc", MotorKind.Dc, "direct-current motor"),
+    ];
+
+    public static readonly WordChoice[] DesignLetters =
+        Enum.GetValues<DesignLetter>().Select(d => new WordChoice(d.ToString(), d, $"NEMA design {d}")).ToArray();
+
+    public static readonly WordChoice[] CodeLetters =
+        Enum.GetValues<CodeLetter>().Select(c => new WordChoice(c.ToString(), c, $"locked-rotor code letter {c} (Table 430.7(B))")).ToArray();
+
+    public static readonly WordChoice[] Efficiencies =
+    [
+        new("standard", Efficiency.Standard, "not marked energy-efficient or premium efficiency"),
+        new("premium", Efficiency.Premium, "design B premium efficiency or energy-efficient", "energy-efficient"),
+    ];
+
+    public static readonly WordChoice[] DutyKinds =
+    [
+        new("continuous", DutyKind.Continuous, "continuous duty (the default)"),
+        new("short-time", DutyKind.ShortTime, "short-time duty, e.g. operating valves or raising rolls"),
+        new("intermittent", DutyKind.Intermittent, "intermittent duty, e.g. freight elevators, tool heads, pumps"),
+        new("periodic", DutyKind.Periodic, "periodic duty, e.g. rolls, ore- and coal-handling machines"),
+        new("varying", DutyKind.Varying, "varying duty"),
+    ];
+
+    public static readonly WordChoice[] StartingMethods =
+    [
+        new("full-voltage", StartingMethod.FullVoltage, "across-the-line starting (the default)"),
+        new("wye-delta", StartingMethod.WyeDelta, "wye-start, delta-run"),
+        new("part-winding", StartingMethod.PartWinding, "part-winding start"),
+        new("soft-start", StartingMethod.SoftStart, "solid-state reduced-voltage starter"),
+        new("drive", StartingMethod.Drive, "adjustable-speed drive; give its rated input current"),
+    ];
+
+    public static readonly WordChoice[] Applications =
+    [
+        new("low-speed", NameplateBasis.LowSpeed, "built for low speed (under 1200 rpm): size from nameplate current"),
+        new("high-torque", NameplateBasis.HighTorque, "high-torque motor: size from nameplate current"),
+        new("multispeed", NameplateBasis.Multispeed, "multispeed motor: size from nameplate current"),
+        new("canned-pump", NameplateBasis.CannedPump, "canned pump: size from nameplate current"),
+        new("shaded-pole-fan", NameplateBasis.ShadedPoleFan, "shaded-pole fan or blower motor: size from nameplate current"),
+        new("psc-fan", NameplateBasis.PscFan, "permanent-split-capacitor fan or blower motor: size from nameplate current"),
+    ];
+
+    public static readonly WordChoice[] LoadDuties =
+    [
+        new("continuous", true, "runs three hours or more at a time: counted at 125 %"),
+        new("non-continuous", false, "counted at 100 % (the default)", "noncontinuous"),
+    ];
+
+    private static string? Positive(decimal v) => v > 0 ? null : "must be greater than zero";
+    private static string? NotNegative(decimal v) => v >= 0 ? null : "must not be negative";
+
+    public static readonly KeywordSpec[] All =
+    [
+        new("project", [Root], Project, [new("name", ArgKind.Text, true)], "Starts the project block: installation settings for the whole file."),
+        new("feeder", [Root], Feeder,
+            [new("tag", Tag, true), new("description", ArgKind.Text, false), new("voltage", Voltage, true, Check: Positive), new("phases", ArgKind.Phases, true)],
+            "Starts a feeder: its tag, description, system voltage and phases (1ph, 3ph or dc)."),
+        new("motor", [Feeder], Motor,
+            [new("tag", Tag, true), new("description", ArgKind.Text, false), new("power", Power, true, Check: Positive),
+             new("voltage", Voltage, false, Check: Positive), new("phases", ArgKind.Phases, false)],
+            "Starts a motor on the feeder above: tag, description, rated power, and optionally its rated voltage and phases."),
+        new("load", [Feeder], Load,
+            [new("tag", Tag, true), new("description", ArgKind.Text, false), new("current", Current, false, Check: Positive),
+             new("apparent-power", ApparentPower, false, Check: Positive), new("duty", Word, false, LoadDuties)],
+            "A non-motor load on the feeder above: its current or kVA, continuous or not."),
+
+        new("code", [Project, Feeder], null, [new("edition", Word, true, Editions)], "The code edition the file is checked against."),
+        new("ambient", Settings, null, [new("temperature", Temperature, true)], "Ambient temperature for conductor correction (Table 310.15(B)(1)(1))."),
+        new("conductor", Settings, null,
+            [new("material", Word, true, Materials), new("insulation", Word, false, Insulations), new("termination", Temperature, false)],
+            "Conductor material, insulation type and the terminations' temperature rating (110.14(C))."),
+        new("raceway", Settings, null, [new("type", Word, true, Raceways)], "Raceway type, for conduit fill and reactance."),
+        new("ccc", Settings, null, [new("count", Integer, true, Check: Positive)], "Current-carrying conductors in the raceway (Table 310.15(C)(1))."),
+        new("drop-limit", Settings, null,
+            [new("branch", Percent, true, Check: Positive), new("total", Percent, false, Check: Positive)],
+            "Voltage-drop limits that trigger a warning: branch, and feeder plus branch."),
+        new("power-factor", Settings, null,
+            [new("value", Number, true, Check: v => v is > 0 and <= 1 ? null : "must be above 0 and at most 1")],
+            "Running power factor used for voltage drop (Chapter 9 Table 9, note 2)."),
+
+        new("from", [Feeder], null, [new("source", Tag, true)], "The feeder or switchboard this feeder is supplied from."),
+        new("length", [Feeder, Motor], null, [new("length", Length, true, Check: NotNegative)], "One-way circuit length, for voltage drop."),
+        new("wire", [Feeder, Motor], null, [new("size", Wire, true)], "Phase conductor size as installed: 10 AWG, 4/0 AWG, 250 kcmil, 2x 250 kcmil."),
+        new("ground", [Feeder, Motor], null, [new("size", Wire, true)], "Equipment grounding conductor size as installed."),
+        new("protection", [Feeder, Motor], null,
+            [new("device", Word, true, Devices), new("rating", Current, false, Check: Positive)],
+            "Short-circuit and ground-fault protective device and its rating."),
+
+        new("nameplate", [Motor], null, [new("current", Current, true, Check: Positive)], "Nameplate full-load amperes (FLA), used for overloads."),
+        new("service-factor", [Motor], null,
+            [new("value", Number, true, Check: v => v >= 1.0m ? null : "must be at least 1.0")], "Marked service factor."),
+        new("temp-rise", [Motor], null, [new("temperature", Temperature, true, Check: Positive)], "Marked temperature rise."),
+        new("design", [Motor], null, [new("letter", Word, true, DesignLetters)], "NEMA design letter."),
+        new("code-letter", [Motor], null, [new("letter", Word, true, CodeLetters)], "Locked-rotor code letter (Table 430.7(B))."),
+        new("kind", [Motor], null, [new("kind", Word, true, MotorKinds)], "Motor construction; induction when not given."),
+        new("efficiency", [Motor], null, [new("class", Word, true, Efficiencies)], "Design B premium efficiency motors take other instantaneous-trip limits."),
+        new("duty", [Motor], null, [new("duty", Word, true, DutyKinds), new("rating", Duration, false)],
+            "Duty and, for non-continuous duty, the motor's time rating (5, 15, 30 or 60 min; none = continuous rated)."),
+        new("starting", [Motor], null, [new("method", Word, true, StartingMethods), new("input-current", Current, false, Check: Positive)],
+            "Starting method; for a drive, its rated input current."),
+        new("overload", [Motor], null, [new("setting", Current, true, Check: Positive)], "Overload relay setting or heater rating."),
+        new("disconnect", [Motor], null,
+            [new("rating", Current, false, Check: Positive), new("power", Power, false, Check: Positive)],
+            "Disconnecting means: ampere rating and horsepower rating."),
+        new("controller", [Motor], null, [new("power", Power, true, Check: Positive)], "Controller horsepower rating."),
+        new("quantity", [Motor], null, [new("count", Integer, true, Check: Positive)], "Number of identical motors this line stands for."),
+        new("like", [Motor], null, [new("motor", Tag, true)], "Take every attribute not given here from another motor."),
+        new("application", [Motor], null, [new("kind", Word, true, Applications)],
+            "Motors that 430.6(A) sizes from the nameplate current instead of the tables."),
+        new("hard-start", [Motor], null, [],
+            "The motor will not start on the Table 430.52(C)(1) rating: allow the 430.52(C)(1)(b) maximums."),
+    ];
+
+    private static readonly Dictionary<string, KeywordSpec> ByName =
+        All.ToDictionary(k => k.Keyword, StringComparer.OrdinalIgnoreCase);
+
+    public static KeywordSpec? Find(string keyword) => ByName.GetValueOrDefault(keyword);
+
+    public static IEnumerable<KeywordSpec> AllowedIn(BlockKind block) => All.Where(k => k.AllowedIn.Contains(block));
+}

@@ -1,0 +1,34 @@
+using System.Collections.Immutable;
+using MotorLang.Parser.Syntax;
+using MotorLang.Parser.Text;
+
+namespace MotorLang.Parser.Statements;
+
+/// <summary>One argument as read: which position it filled, its value, where it is and how the formatter writes it.</summary>
+public sealed record Argument(ArgSpec Spec, object Value, SourceRange Range, string Canonical);
+
+/// <summary>A keyword line with its arguments matched to the keyword's positions.</summary>
+public sealed class Statement
+{
+    internal Statement(SyntaxLine line, KeywordSpec spec, ImmutableArray<Argument> args)
+    {
+        Line = line;
+        Spec = spec;
+        Args = args;
+    }
+
+    public SyntaxLine Line { get; }
+
+    public KeywordSpec Spec { get; }
+
+    public SyntaxToken KeywordToken => Line.Tokens[0];
+
+    public string Keyword => Spec.Keyword;
+
+    public ImmutableArray<Argument> Args { get; }
+
+    public Argument? Arg(string name) => Args.FirstOrDefault(a => a.Spec.Name == name);
+
+    /// <summary>The range from the keyword to the last token (comment excluded).</summary>
+    public SourceRange Range => SourceRange.Cover(KeywordToken.Range, Line.Tokens[^1].Range);
+}

@@ -1,0 +1,347 @@
+using System.Collections.Immutable;
+using MotorLang.Parser.Diagnostics;
+using MotorLang.Parser.Syntax;
+using MotorLang.Parser.Text;
+using MotorLang.Parser.Values;
+using MotorLang.Sizing.Domain;
+
+namespace MotorLang.Parser.Statements;
+
+/// <summary>
+/// Matches the tokens after a keyword to the keyword's argument positions. Tag and description
+/// come first in order; values with units may then come in any order, since their units say
+/// what they are.
+/// </summary>
+internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagnostics)
+{
+    /// <summary>A value made of one token or of a number and its unit written apart ("15 hp", "10 AWG").</summary>
+    private sealed record Item(SyntaxToken First, SyntaxToken Last, LexicalValue Value)
+    {
+        public SourceRange Range => SourceRange.Cover(First.Range, Last.Range);
+
+        public string Text => First == Last ? First.Text : $"{First.Text} {Last.Text}";
+    }
+
+    /// <summary>Parses the statement; returns it with whatever arguments could be read and whether all was well.</summary>
+    public Statement Parse(SyntaxLine line, KeywordSpec spec, out bool ok)
+    {
+        var before = diagnostics.Count;
+        var items = Group(line.Tokens);
+        var filled = new Argument?[spec.Args.Length];
+        var next = 0;
+        foreach (var item in items)
+        {
+            var slot = -1;
+            if (item.First.Kind == TokenKind.String)
+            {
+                slot = FirstOpen(spec, filled, a => a.Kind == ArgKind.Text);
+                if (slot < 0)
+                {
+                    Error(SyntaxCodes.UnexpectedValue, item.Range, $"'{spec.Keyword}' takes no description here");
+                    continue;
+                }
+
+                filled[slot] = new Argument(spec.Args[slot], item.First.StringValue, item.Range, item.First.Text);
+                next = 1;
+                continue;
+            }
+
+            // A tag is positional: the first word after the keyword.
+            if (next == 0 && spec.Args.Length > 0 && spec.Args[0].Kind == ArgKind.Tag && filled[0] is null)
+            {
+                filled[0] = ReadTag(spec.Args[0], item);
+                next = 1;
+                continue;
+            }
+
+            slot = Place(spec, filled, item);
+            next = Math.Max(next, 1);
+            if (slot >= 0) continue;
+        }
+
+        // A value that was there but wrong has been reported already; saying it is missing too is noise.
+        for (var i = 0; i < spec.Args.Length && diagnostics.Count == before; i++)
+        {
+            if (filled[i] is null && spec.Args[i].Required)
+            {
+                var missing = spec.Args[i];
+                var hint = missing.Kind == ArgKind.Wire && line.Comment is { } c && c.Text.Length > 1 && char.IsAsciiDigit(c.Text[1])
+                    ? $"; '#' starts a comment, so write '{c.Text[1..].Split(' ')[0]} AWG'"
+                    : "";
+                Error(SyntaxCodes.MissingValue, SourceRange.Cover(line.Tokens[0].Range, line.Tokens[^1].Range),
+                    $"'{spec.Keyword}' needs {Describe(missing)}{hint}");
+            }
+        }
+
+        if (spec.Keyword == "load" && filled.Any(a => a?.Spec.Kind is ArgKind.Current) && filled.Any(a => a?.Spec.Kind is ArgKind.ApparentPower))
+        {
+            Error(SyntaxCodes.UnexpectedValue, line.Tokens[0].Range, "give a load's current or its kVA, not both");
+        }
+
+        ok = diagnostics.Count == before;
+        return new Statement(line, spec, filled.OfType<Argument>().ToImmutableArray());
+    }
+
+    private int Place(KeywordSpec spec, Argument?[] filled, Item item)
+    {
+        switch (item.Value)
+        {
+            case LexicalValue.Word w:
+            {
+                var slot = FirstOpen(spec, filled, a => a.Kind == ArgKind.Word && a.Choices!.Any(c => c.Matches(w.Text))
+                                                        || a.Kind == ArgKind.Phases && w.Text.Equals("dc", StringComparison.OrdinalIgnoreCase));
+                if (slot >= 0)
+                {
+                    var a = spec.Args[slot];
+                    filled[slot] = a.Kind == ArgKind.Phases
+                        ? new Argument(a, Phases.Dc, item.Range, "dc")
+                        : Choose(a, w.Text, item.Range);
+                    return slot;
+                }
+
+                if (w.Text.Length > 0 && char.IsAsciiDigit(w.Text[0]))
+                {
+                    Error(SyntaxCodes.BadNumber, item.Range, $"'{item.Text}' is not a number{ExpectedSuffix(spec, filled)}");
+                    return -1;
+                }
+
+                var open = FirstOpen(spec, filled, a => a.Kind == ArgKind.Word);
+                if (open >= 0)
+                {
+                    var choices = spec.Args[open].Choices!.Select(c => c.Canonical).ToArray();
+                    Error(SyntaxCodes.UnexpectedValue, item.Range,
+                        $"unknown {spec.Args[open].Name} '{w.Text}'; expected one of {string.Join(", ", choices)}{Suggestions.DidYouMean(w.Text, choices)}");
+                }
+                else
+                {
+                    Error(SyntaxCodes.UnexpectedValue, item.Range, $"unexpected '{w.Text}'{ExpectedSuffix(spec, filled)}");
+                }
+
+                return -1;
+            }
+
+            case LexicalValue.Parallel p:
+                return PlaceWire(spec, filled, item, p.Sets, p.Size);
+
+            case LexicalValue.Number n when n.Unit is Unit.Awg or Unit.Kcmil:
+                return PlaceWire(spec, filled, item, 1, n);
+
+            case LexicalValue.Number n when n.UnitText.Length > 0 && n.Unit == Unit.None:
+                Error(SyntaxCodes.BadUnit, item.Range, $"unknown unit '{n.UnitText}' in '{item.Text}'{ExpectedSuffix(spec, filled)}");
+                return -1;
+
+            case LexicalValue.Number n:
+            {
+                var kinds = KindsFor(n.Unit);
+                var slot = FirstOpen(spec, filled, a => kinds.Contains(a.Kind));
+                if (slot < 0)
+                {
+                    var expected = ExpectedSuffix(spec, filled);
+                    if (n.Unit == Unit.None && FirstOpen(spec, filled, a => a.Kind is not (ArgKind.Word or ArgKind.Text or ArgKind.Tag)) >= 0)
+                        Error(SyntaxCodes.BadUnit, item.Range, $"'{item.Text}' needs a unit{expected}");
+                    else
+                        Error(SyntaxCodes.BadUnit, item.Range, $"'{item.Text}' is {Units.Describe(n.Unit)}{expected}");
+                    return -1;
+                }
+
+                var arg = spec.Args[slot];
+                if (n.Value is not { } value)
+                {
+                    Error(SyntaxCodes.BadNumber, item.Range, $"'{n.Digits}' is not a number");
+                    return -1;
+                }
+
+                if (!CheckRange(spec, arg, value, item)) return -1;
+                filled[slot] = ToArgument(arg, n, value, item);
+                return filled[slot] is null ? -1 : slot;
+            }
+        }
+
+        return -1;
+    }
+
+    private Argument? ToArgument(ArgSpec arg, LexicalValue.Number n, decimal value, Item item)
+    {
+        var canonical = n.Digits + Units.Canonical(n.Unit);
+        switch (arg.Kind)
+        {
+            case ArgKind.Integer:
+                if (value != decimal.Truncate(value) || value > int.MaxValue)
+                {
+                    Error(SyntaxCodes.BadNumber, item.Range, $"'{item.Text}' must be a whole number");
+                    return null;
+                }
+
+                return new Argument(arg, (int)value, item.Range, canonical);
+            case ArgKind.Number:
+                return new Argument(arg, value, item.Range, canonical);
+            case ArgKind.Phases:
+                if (value is not (1 or 3))
+                {
+                    Error(SyntaxCodes.OutOfRange, item.Range, $"phases must be 1ph, 3ph or dc, not '{item.Text}'");
+                    return null;
+                }
+
+                return new Argument(arg, value == 1 ? Phases.Single : Phases.Three, item.Range, canonical);
+            default:
+                return new Argument(arg, new Quantity(value, n.Unit), item.Range, canonical);
+        }
+    }
+
+    private bool CheckRange(KeywordSpec spec, ArgSpec arg, decimal value, Item item)
+    {
+        if (arg.Check?.Invoke(value) is not { } problem) return true;
+        Error(SyntaxCodes.OutOfRange, item.Range, $"{spec.Keyword} {arg.Name} {problem}, not '{item.Text}'");
+        return false;
+    }
+
+    private int PlaceWire(KeywordSpec spec, Argument?[] filled, Item item, int sets, LexicalValue.Number? size)
+    {
+        var slot = FirstOpen(spec, filled, a => a.Kind == ArgKind.Wire);
+        if (slot < 0)
+        {
+            Error(SyntaxCodes.UnexpectedValue, item.Range, $"'{spec.Keyword}' takes no wire size{ExpectedSuffix(spec, filled)}");
+            return -1;
+        }
+
+        if (size is null || size.Unit is not (Unit.Awg or Unit.Kcmil))
+        {
+            Error(SyntaxCodes.BadUnit, item.Range, $"'{item.Text}' needs a size in AWG or kcmil, e.g. '2x 250 kcmil'");
+            return -1;
+        }
+
+        if (sets is < 1 or > 20)
+        {
+            Error(SyntaxCodes.OutOfRange, item.Range, $"parallel sets must be between 1 and 20, not {sets}");
+            return -1;
+        }
+
+        var found = size.Unit == Unit.Awg
+            ? ConductorSize.TryFromAwg(size.Digits, out var s)
+            : ConductorSize.TryFromKcmil(size.Digits, out s);
+        if (!found)
+        {
+            var series = size.Unit == Unit.Awg ? "18 AWG to 4/0 AWG" : "250 kcmil to 2000 kcmil";
+            Error(SyntaxCodes.UnknownWireSize, item.Range, $"'{item.Text}' is not a standard wire size ({series})");
+            return -1;
+        }
+
+        var wire = new WireSpec(sets, s);
+        filled[slot] = new Argument(spec.Args[slot], wire, item.Range, wire.ToString());
+        return slot;
+    }
+
+    private Argument ReadTag(ArgSpec arg, Item item)
+    {
+        var text = item.First.Text;
+        if (!IsValidTag(text))
+        {
+            Error(SyntaxCodes.BadTag, item.First.Range,
+                $"'{text}' is not a valid tag: use letters, digits, '-', '_', '.' or '/', starting with a letter or digit");
+        }
+
+        return new Argument(arg, text, item.First.Range, text);
+    }
+
+    public static bool IsValidTag(string text) =>
+        text.Length > 0 && char.IsLetterOrDigit(text[0]) && text.All(c => char.IsLetterOrDigit(c) || c is '-' or '_' or '.' or '/');
+
+    private static Argument Choose(ArgSpec arg, string text, SourceRange range)
+    {
+        var choice = arg.Choices!.First(c => c.Matches(text));
+        return new Argument(arg, choice.Value, range, choice.Canonical);
+    }
+
+    private List<Item> Group(ImmutableArray<SyntaxToken> tokens)
+    {
+        var items = new List<Item>(tokens.Length);
+        for (var i = 1; i < tokens.Length; i++)
+        {
+            var t = tokens[i];
+            if (t.Kind == TokenKind.String)
+            {
+                items.Add(new Item(t, t, new LexicalValue.Word(t.Text)));
+                continue;
+            }
+
+            var v = reader.Read(t.Text);
+            var nextWord = i + 1 < tokens.Length && tokens[i + 1].Kind == TokenKind.Word ? tokens[i + 1] : null;
+            if (v is LexicalValue.Number { UnitText: "" } bare && nextWord is not null && Units.TryParse(nextWord.Text, out var unit))
+            {
+                items.Add(new Item(t, nextWord, bare with { Unit = unit, UnitText = nextWord.Text }));
+                i++;
+                continue;
+            }
+
+            if (v is LexicalValue.Parallel { Size: null } p && nextWord is not null)
+            {
+                // "2x 250 kcmil" is three tokens: the prefix, the number and the unit.
+                var sizeTokens = i + 2 < tokens.Length && tokens[i + 2].Kind == TokenKind.Word && Units.TryParse(tokens[i + 2].Text, out _) ? 2 : 1;
+                var sizeText = sizeTokens == 2 ? nextWord.Text + tokens[i + 2].Text : nextWord.Text;
+                if (reader.Read(sizeText) is LexicalValue.Number n)
+                {
+                    items.Add(new Item(t, tokens[i + sizeTokens], p with { Size = n }));
+                    i += sizeTokens;
+                    continue;
+                }
+            }
+
+            items.Add(new Item(t, t, v));
+        }
+
+        return items;
+    }
+
+    private static int FirstOpen(KeywordSpec spec, Argument?[] filled, Func<ArgSpec, bool> accepts)
+    {
+        for (var i = 0; i < spec.Args.Length; i++)
+        {
+            if (filled[i] is null && accepts(spec.Args[i])) return i;
+        }
+
+        return -1;
+    }
+
+    private static ArgKind[] KindsFor(Unit unit) => unit switch
+    {
+        Unit.Hp or Unit.Kw => [ArgKind.Power],
+        Unit.Volt => [ArgKind.Voltage],
+        Unit.Amp => [ArgKind.Current],
+        Unit.Foot or Unit.Metre => [ArgKind.Length],
+        Unit.Celsius or Unit.Fahrenheit => [ArgKind.Temperature],
+        Unit.Percent => [ArgKind.Percent],
+        Unit.Kva => [ArgKind.ApparentPower],
+        Unit.Minute => [ArgKind.Duration],
+        Unit.Phase => [ArgKind.Phases],
+        _ => [ArgKind.Number, ArgKind.Integer],
+    };
+
+    private static string ExpectedSuffix(KeywordSpec spec, Argument?[] filled)
+    {
+        var open = spec.Args.Where((a, i) => filled[i] is null).Select(Describe).ToArray();
+        return open.Length == 0 ? $"; '{spec.Keyword}' takes nothing more" : $"; '{spec.Keyword}' expects {string.Join(" or ", open)}";
+    }
+
+    internal static string Describe(ArgSpec a) => a.Kind switch
+    {
+        ArgKind.Tag => $"a {a.Name}",
+        ArgKind.Text => "a quoted description",
+        ArgKind.Power => "a power (e.g. 15hp or 11kW)",
+        ArgKind.Voltage => "a voltage (e.g. 480V)",
+        ArgKind.Phases => "phases (1ph, 3ph or dc)",
+        ArgKind.Current => $"a {a.Name} in A (e.g. 22.5A)",
+        ArgKind.Length => "a length (e.g. 90ft or 27m)",
+        ArgKind.Temperature => $"a {a.Name} (e.g. 40C)",
+        ArgKind.Percent => $"a {a.Name} percentage (e.g. 3%)",
+        ArgKind.Number => $"a {a.Name} (a plain number)",
+        ArgKind.Integer => $"a {a.Name} (a whole number)",
+        ArgKind.Wire => "a wire size (e.g. 10 AWG, 4/0 AWG, 250 kcmil, 2x 250 kcmil)",
+        ArgKind.Word => $"a {a.Name} ({string.Join(", ", a.Choices!.Take(8).Select(c => c.Canonical))})",
+        ArgKind.Duration => "a time rating (5min, 15min, 30min or 60min)",
+        ArgKind.ApparentPower => "an apparent power (e.g. 15kVA)",
+        _ => a.Name,
+    };
+
+    private void Error(string code, SourceRange range, string message) =>
+        diagnostics.Add(new Diagnostic(code, Severity.Error, range, message));
+}

@@ -1,0 +1,199 @@
+using System.Collections.Immutable;
+using MotorLang.Parser.Diagnostics;
+using MotorLang.Parser.Model;
+using MotorLang.Parser.Statements;
+using MotorLang.Parser.Syntax;
+using MotorLang.Parser.Text;
+
+namespace MotorLang.Parser;
+
+/// <summary>
+/// Assigns each statement line to a block by its indentation and builds the model as it goes.
+/// A line that cannot be read opens a "broken" block so that the lines under it are skipped
+/// quietly instead of each reporting that it is misplaced.
+/// </summary>
+internal sealed class StructureBuilder(StatementParser statements, List<Diagnostic> diagnostics)
+{
+    private sealed class Block(BlockKind kind, int headerIndent, BlockNode? node, bool broken)
+    {
+        public BlockKind Kind { get; } = kind;
+        public int HeaderIndent { get; } = headerIndent;
+        public BlockNode? Node { get; } = node;
+        public bool Broken { get; } = broken;
+        public int? ChildIndent { get; set; }
+    }
+
+    private readonly List<Block> _stack = [];
+    private readonly List<FeederNode> _feeders = [];
+    private readonly Dictionary<string, CircuitNode> _byTag = new(StringComparer.OrdinalIgnoreCase);
+    private ProjectNode? _project;
+
+    public MotorList Build(ImmutableArray<SyntaxLine> lines)
+    {
+        _stack.Add(new Block(BlockKind.Root, -1, null, false) { ChildIndent = 0 });
+        foreach (var line in lines)
+        {
+            if (line.InConflict)
+            {
+                line.IsBroken = true;
+                continue;
+            }
+
+            if (line.Tokens.Length == 0) continue;
+            Place(line);
+        }
+
+        var model = new MotorList(_project, _feeders, _byTag);
+        new ReferenceChecker(model, diagnostics).Check();
+        return model;
+    }
+
+    private void Place(SyntaxLine line)
+    {
+        var indent = line.IndentWidth;
+        while (_stack.Count > 1 && indent <= _stack[^1].HeaderIndent) _stack.RemoveAt(_stack.Count - 1);
+        var parent = _stack[^1];
+        if (parent.Broken)
+        {
+            line.IsBroken = true;
+            return;
+        }
+
+        if (line.IndentHasTab)
+        {
+            Error(SyntaxCodes.TabIndentation, SourceRange.OnLine(line.Index, 0, indent),
+                "tabs are not allowed in indentation; indent with spaces (two per level)");
+            line.IsBroken = true;
+        }
+        else if (parent.ChildIndent is null)
+        {
+            parent.ChildIndent = indent;
+            if (parent.Node is not null) parent.Node.ChildIndent = indent;
+        }
+        else if (indent != parent.ChildIndent)
+        {
+            var message = parent.Kind == BlockKind.Root
+                ? $"unexpected indentation: nothing above opens a block; 'project' and 'feeder' start at column 1"
+                : $"indentation of {indent} spaces does not match the {parent.ChildIndent} of the lines above in this {parent.Kind.ToString().ToLowerInvariant()}";
+            Error(SyntaxCodes.BadIndentation, SourceRange.OnLine(line.Index, 0, Math.Max(indent, 1)), message);
+            line.IsBroken = true;
+        }
+
+        var first = line.Tokens[0];
+        var spec = first.Kind == TokenKind.Word ? Keywords.Find(first.Text) : null;
+        if (spec is null)
+        {
+            var allowed = Keywords.AllowedIn(parent.Kind).Select(k => k.Keyword);
+            var message = first.Kind == TokenKind.String
+                ? "a line must start with a keyword; a description goes after the tag"
+                : $"unknown keyword '{first.Text}'{Suggestions.DidYouMean(first.Text, allowed)}";
+            Error(SyntaxCodes.UnknownKeyword, first.Range, message);
+            Open(BlockKind.Root, indent, null, broken: true, line);
+            return;
+        }
+
+        if (!spec.AllowedIn.Contains(parent.Kind))
+        {
+            Error(SyntaxCodes.MisplacedStatement, first.Range, Misplaced(spec, parent.Kind));
+            if (spec.IsHeader) Open(spec.Opens!.Value, indent, null, broken: true, line);
+            else line.IsBroken = true;
+            return;
+        }
+
+        var statement = statements.Parse(line, spec, out var ok);
+        line.Statement = statement;
+        line.Depth = _stack.Count - 1;
+        line.IsBroken |= !ok;
+        Extend(line.Index);
+
+        if (spec.IsHeader)
+        {
+            var node = CreateNode(statement, parent);
+            Open(spec.Opens!.Value, indent, node, broken: false, line);
+            return;
+        }
+
+        if (parent.Node is { } owner)
+        {
+            owner.LastOwnLine = line.Index;
+            if (owner.Add(statement) is { } earlier)
+            {
+                Error(SyntaxCodes.DuplicateSetting, first.Range,
+                    $"'{spec.Keyword}' is already given on line {earlier.Line.Index + 1}; remove one of them");
+                line.IsBroken = true;
+            }
+        }
+    }
+
+    private void Open(BlockKind kind, int indent, BlockNode? node, bool broken, SyntaxLine line)
+    {
+        if (broken) line.IsBroken = true;
+        _stack.Add(new Block(kind, indent, node, broken));
+    }
+
+    /// <summary>Every open block's extent grows to include this line.</summary>
+    private void Extend(int lineIndex)
+    {
+        foreach (var b in _stack)
+        {
+            if (b.Node is not null) b.Node.LastLine = lineIndex;
+        }
+    }
+
+    private BlockNode? CreateNode(Statement header, Block parent)
+    {
+        switch (header.Keyword)
+        {
+            case "project":
+                if (_project is not null)
+                {
+                    Error(SyntaxCodes.DuplicateProject, header.KeywordToken.Range,
+                        $"only one project block is allowed; the first is on line {_project.Header.Line.Index + 1}");
+                    return null;
+                }
+
+                return _project = new ProjectNode(header);
+            case "feeder":
+                var feeder = new FeederNode(header, _project);
+                _feeders.Add(feeder);
+                Register(feeder);
+                return feeder;
+            case "motor" when parent.Node is FeederNode f:
+                var motor = new MotorNode(header, f);
+                f.Add(motor);
+                Register(motor);
+                return motor;
+            case "load" when parent.Node is FeederNode f:
+                var load = new LoadNode(header, f);
+                f.Add(load);
+                Register(load);
+                return load;
+            default:
+                return null;
+        }
+    }
+
+    private void Register(CircuitNode node)
+    {
+        if (node.Tag is not { } tag) return;
+        if (_byTag.TryGetValue(tag.Value, out var earlier))
+        {
+            Error(SyntaxCodes.DuplicateTag, tag.Range,
+                $"tag '{tag.Value}' is already used on line {earlier.Header.Line.Index + 1}; tags must be unique in a file");
+            return;
+        }
+
+        _byTag[tag.Value] = node;
+    }
+
+    private static string Misplaced(KeywordSpec spec, BlockKind parent)
+    {
+        var homes = string.Join(" or ", spec.AllowedIn.Select(b => b == BlockKind.Root ? "the top level" : $"a {b.ToString().ToLowerInvariant()} block"));
+        return spec.IsHeader
+            ? $"'{spec.Keyword}' cannot start here; it belongs in {homes}"
+            : $"'{spec.Keyword}' does not belong in {(parent == BlockKind.Root ? "the top level" : $"a {parent.ToString().ToLowerInvariant()} block")}; it belongs in {homes}";
+    }
+
+    private void Error(string code, SourceRange range, string message) =>
+        diagnostics.Add(new Diagnostic(code, Severity.Error, range, message));
+}

@@ -1,0 +1,40 @@
+namespace MotorLang.Parser.Values;
+
+/// <summary>The units the format knows, each with the one spelling the formatter writes.</summary>
+public enum Unit { None, Hp, Kw, Volt, Amp, Foot, Metre, Celsius, Fahrenheit, Percent, Kva, Minute, Phase, Awg, Kcmil }
+
+public static class Units
+{
+    private static readonly Dictionary<string, Unit> Spellings = new(StringComparer.OrdinalIgnoreCase)
+    {
+        ["hp"] = Unit.Hp, ["kw"] = Unit.Kw, ["v"] = Unit.Volt, ["a"] = Unit.Amp,
+        ["ft"] = Unit.Foot, ["m"] = Unit.Metre, ["c"] = Unit.Celsius, ["°c"] = Unit.Celsius,
+        ["f"] = Unit.Fahrenheit, ["°f"] = Unit.Fahrenheit, ["%"] = Unit.Percent, ["kva"] = Unit.Kva,
+        ["min"] = Unit.Minute, ["ph"] = Unit.Phase, ["awg"] = Unit.Awg, ["kcmil"] = Unit.Kcmil, ["mcm"] = Unit.Kcmil,
+    };
+
+    public static bool TryParse(string text, out Unit unit) => Spellings.TryGetValue(text, out unit);
+
+    public static string Canonical(Unit unit) => unit switch
+    {
+        Unit.Hp => "hp", Unit.Kw => "kW", Unit.Volt => "V", Unit.Amp => "A", Unit.Foot => "ft", Unit.Metre => "m",
+        Unit.Celsius => "C", Unit.Fahrenheit => "F", Unit.Percent => "%", Unit.Kva => "kVA", Unit.Minute => "min",
+        Unit.Phase => "ph", Unit.Awg => "AWG", Unit.Kcmil => "kcmil", _ => "",
+    };
+
+    /// <summary>What a value with this unit measures, for messages ("expected a current").</summary>
+    public static string Describe(Unit unit) => unit switch
+    {
+        Unit.Hp or Unit.Kw => "a power (hp or kW)",
+        Unit.Volt => "a voltage (V)",
+        Unit.Amp => "a current (A)",
+        Unit.Foot or Unit.Metre => "a length (ft or m)",
+        Unit.Celsius or Unit.Fahrenheit => "a temperature (C or F)",
+        Unit.Percent => "a percentage (%)",
+        Unit.Kva => "an apparent power (kVA)",
+        Unit.Minute => "a time rating (min)",
+        Unit.Phase => "a phase count (1ph or 3ph)",
+        Unit.Awg or Unit.Kcmil => "a wire size (AWG or kcmil)",
+        _ => "a plain number",
+    };
+}

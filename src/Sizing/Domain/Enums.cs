@@ -1,0 +1,31 @@
+namespace MotorLang.Sizing.Domain;
+
+public enum Phases { Dc = 0, Single = 1, Three = 3 }
+
+/// <summary>Motor construction, as the rows of Table 430.52(C)(1) distinguish them.</summary>
+public enum MotorKind { Induction, WoundRotor, Synchronous, Dc }
+
+public enum DesignLetter { A, B, C, D }
+
+/// <summary>Design B premium efficiency / energy-efficient motors get the 1100 % instantaneous-trip column.</summary>
+public enum Efficiency { Standard, Premium }
+
+public enum ProtectiveDevice { NonTimeDelayFuse, DualElementFuse, InstantaneousTripBreaker, InverseTimeBreaker }
+
+public enum DutyKind { Continuous, ShortTime, Intermittent, Periodic, Varying }
+
+/// <summary>The time rating columns of Table 430.22(E).</summary>
+public enum DutyRating { Minutes5, Minutes15, Minutes30To60, Continuous }
+
+public enum StartingMethod { FullVoltage, WyeDelta, PartWinding, SoftStart, Drive }
+
+public enum ConductorMaterial { Copper, Aluminum }
+
+/// <summary>Raceway types whose areas (Chapter 9 Table 4) and reactance class (Table 9) we carry.</summary>
+public enum RacewayType { Emt, Rmc, Pvc }
+
+/// <summary>Motors for which 430.6(A) sends conductor, disconnect and protection sizing to the nameplate current.</summary>
+public enum NameplateBasis { None, LowSpeed, HighTorque, Multispeed, CannedPump, ShadedPoleFan, PscFan }
+
+/// <summary>Code letters of Table 430.7(B). I, O and Q are not used by the table.</summary>
+public enum CodeLetter { A, B, C, D, E, F, G, H, J, K, L, M, N, P, R, S, T, U, V }

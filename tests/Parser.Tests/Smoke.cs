@@ -1,0 +1,1 @@
+namespace MotorLang.Parser.Tests; public class SmokeTests { [Fact] public void Ok() => Assert.True(true); }

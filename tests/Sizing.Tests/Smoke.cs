@@ -1,0 +1,1 @@
+namespace MotorLang.Sizing.Tests; public class SmokeTests { [Fact] public void Ok() => Assert.True(true); }
