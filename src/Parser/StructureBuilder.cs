@@ -59,6 +59,21 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
             return;
         }
 
+        // An unreadable line says nothing reliable about indentation, so it neither sets nor
+        // breaks the block's indentation; lines under it are skipped.
+        var first = line.Tokens[0];
+        var spec = first.Kind == TokenKind.Word ? Keywords.Find(first.Text) : null;
+        if (spec is null)
+        {
+            var allowed = Keywords.AllowedIn(parent.Kind).Select(k => k.Keyword);
+            var message = first.Kind == TokenKind.String
+                ? "a line must start with a keyword; a description goes after the tag"
+                : $"unknown keyword '{first.Text}'{Suggestions.DidYouMean(first.Text, allowed)}";
+            Error(SyntaxCodes.UnknownKeyword, first.Range, message);
+            Open(BlockKind.Root, indent, null, broken: true, line);
+            return;
+        }
+
         if (line.IndentHasTab)
         {
             Error(SyntaxCodes.TabIndentation, SourceRange.OnLine(line.Index, 0, indent),
@@ -77,19 +92,6 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
                 : $"indentation of {indent} spaces does not match the {parent.ChildIndent} of the lines above in this {parent.Kind.ToString().ToLowerInvariant()}";
             Error(SyntaxCodes.BadIndentation, SourceRange.OnLine(line.Index, 0, Math.Max(indent, 1)), message);
             line.IsBroken = true;
-        }
-
-        var first = line.Tokens[0];
-        var spec = first.Kind == TokenKind.Word ? Keywords.Find(first.Text) : null;
-        if (spec is null)
-        {
-            var allowed = Keywords.AllowedIn(parent.Kind).Select(k => k.Keyword);
-            var message = first.Kind == TokenKind.String
-                ? "a line must start with a keyword; a description goes after the tag"
-                : $"unknown keyword '{first.Text}'{Suggestions.DidYouMean(first.Text, allowed)}";
-            Error(SyntaxCodes.UnknownKeyword, first.Range, message);
-            Open(BlockKind.Root, indent, null, broken: true, line);
-            return;
         }
 
         if (!spec.AllowedIn.Contains(parent.Kind))

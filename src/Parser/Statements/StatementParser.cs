@@ -99,6 +99,12 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
                     return slot;
                 }
 
+                if (w.Text.Length > 1 && w.Text[0] == '-' && char.IsAsciiDigit(w.Text[1]))
+                {
+                    Error(SyntaxCodes.OutOfRange, item.Range, $"'{item.Text}': values in a motor list are never negative");
+                    return -1;
+                }
+
                 if (w.Text.Length > 0 && char.IsAsciiDigit(w.Text[0]))
                 {
                     Error(SyntaxCodes.BadNumber, item.Range, $"'{item.Text}' is not a number{ExpectedSuffix(spec, filled)}");

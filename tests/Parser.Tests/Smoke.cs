@@ -1,1 +1,0 @@
-namespace MotorLang.Parser.Tests; public class SmokeTests { [Fact] public void Ok() => Assert.True(true); }
