@@ -1,4 +1,3 @@
-using System.Text;
 using MotorLang.Parser.Syntax;
 
 namespace MotorLang.Parser.Formatting;
@@ -10,21 +9,31 @@ namespace MotorLang.Parser.Formatting;
 /// </summary>
 public static class Fingerprint
 {
-    public static string Of(ParseResult parsed)
+    /// <summary>One line's share: its depth (-1 when the line is broken and has none) and its text.</summary>
+    public readonly record struct Entry(int Depth, string Text);
+
+    public static IReadOnlyList<Entry> Of(ParseResult parsed)
     {
-        var sb = new StringBuilder();
+        var entries = new List<Entry>();
         foreach (var line in parsed.Tree.Lines)
         {
-            if (line.InConflict || (line.IsBroken && line.Tokens.Length > 0))
+            if (line.Tokens.Length > 0)
             {
-                sb.Append("raw:").Append(line.Content.Trim()).Append('\n');
-                continue;
+                var text = line.Statement is { } s && !line.InConflict ? Formatter.Canonical(s) : line.Content.Trim();
+                entries.Add(new Entry(line.IsBroken || line.InConflict ? -1 : line.Depth, text));
             }
 
-            if (line.Statement is { } s) sb.Append(line.Depth).Append(' ').Append(Formatter.Canonical(s)).Append('\n');
-            if (line.Comment is { } c) sb.Append(c.Text).Append('\n');
+            if (line.Comment is { } c) entries.Add(new Entry(-1, c.Text));
         }
 
-        return sb.ToString();
+        return entries;
     }
+
+    /// <summary>
+    /// True when both describe the same document. A line that was broken only by its indentation
+    /// may become well-formed once its neighbours are re-indented; that is the one change allowed.
+    /// </summary>
+    public static bool Same(IReadOnlyList<Entry> a, IReadOnlyList<Entry> b) =>
+        a.Count == b.Count && a.Zip(b).All(p => p.First.Text == p.Second.Text
+                                                && (p.First.Depth == p.Second.Depth || p.First.Depth < 0 || p.Second.Depth < 0));
 }

@@ -66,7 +66,7 @@ public static class Formatter
         if (edits.Count == 0) return new FormatResult(tree.Text, edits, true);
 
         // Re-read what we wrote: if it does not describe the same document, give nothing back.
-        var verified = Fingerprint.Of(DocumentParser.Parse(formatted)) == Fingerprint.Of(parsed);
+        var verified = Fingerprint.Same(Fingerprint.Of(DocumentParser.Parse(formatted)), Fingerprint.Of(parsed));
         return verified ? new FormatResult(formatted, edits, true) : new FormatResult(tree.Text, [], false);
     }
 
