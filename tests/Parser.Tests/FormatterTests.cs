@@ -21,7 +21,7 @@ public class FormatterTests
         var expected = Lines(
             "project \"Demo\"",
             "  ambient 40C",
-            "feeder MCC-1 480V 3ph  # main",
+            "feeder MCC-1 480V 3ph        # main",
             "  wire 3/0 AWG",
             "  protection inverse-time-breaker 200A",
             "  motor P-1 \"Pump\" 15hp",
@@ -31,6 +31,13 @@ public class FormatterTests
         var r = Formatter.Format(input);
         Assert.True(r.Verified);
         Assert.Equal(expected, r.Text);
+    }
+
+    [Fact]
+    public void EndOfLineCommentsKeepTheirColumnWhileTheCodeFits()
+    {
+        var r = Formatter.Format(Lines("feeder A 480V 3ph", "  wire   10awg        # a", "  ground 250MCM # b"));
+        Assert.Equal(Lines("feeder A 480V 3ph", "  wire 10 AWG         # a", "  ground 250 kcmil  # b"), r.Text);
     }
 
     [Fact]

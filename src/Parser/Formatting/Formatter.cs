@@ -13,7 +13,8 @@ public sealed record FormatResult(string Text, IReadOnlyList<TextEdit> Edits, bo
 
 /// <summary>
 /// Writes each well-formed line in its canonical form: two spaces per block level, one space
-/// between values, units and keywords spelled one way, two spaces before an end-of-line comment,
+/// between values, units and keywords spelled one way, an end-of-line comment kept in its column
+/// (or two spaces after the code when the code has grown past it),
 /// at most one blank line in a row. Lines with errors, and lines under them, are left exactly as
 /// they are. Lines are never reordered and comments are never touched.
 /// </summary>
@@ -80,7 +81,11 @@ public static class Formatter
             return indent + line.Comment!.Text;
         }
 
-        return Repeat(line.Depth) + Canonical(statement) + (line.Comment is { } c ? "  " + c.Text : "");
+        var code = Repeat(line.Depth) + Canonical(statement);
+        if (line.Comment is not { } comment) return code;
+        // Comments aligned in a column stay in that column while the code fits before it.
+        var column = code.Length + 2 <= comment.Column ? comment.Column : code.Length + 2;
+        return code.PadRight(column) + comment.Text;
     }
 
     /// <summary>The statement as the formatter writes it, without indentation or comment.</summary>
