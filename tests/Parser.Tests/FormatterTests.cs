@@ -21,7 +21,7 @@ public class FormatterTests
         var expected = Lines(
             "project \"Demo\"",
             "  ambient 40C",
-            "feeder MCC-1 480V 3ph        # main",
+            "feeder MCC-1 480V 3ph      # main",
             "  wire 3/0 AWG",
             "  protection inverse-time-breaker 200A",
             "  motor P-1 \"Pump\" 15hp",
