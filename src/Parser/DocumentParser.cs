@@ -52,8 +52,8 @@ public static class DocumentParser
     private static ParseResult Unreadable(string text, bool hasBom, List<Diagnostic> diagnostics)
     {
         // Keep the text as one opaque line so printing the tree still gives the input back.
-        var body = hasBom ? text[1..] : text;
-        var line = new SyntaxLine(0, 0, body, "", 0, false, [], null, inConflict: false) { IsBroken = true };
+        var start = hasBom ? 1 : 0;
+        var line = new SyntaxLine(0, 0, text, start, text.Length - start, "", 0, false, [], null, inConflict: false) { IsBroken = true };
         var diags = diagnostics.ToImmutableArray();
         return new ParseResult(new SyntaxTree(text, hasBom, [line], diags), new MotorList(null, [], new(StringComparer.OrdinalIgnoreCase)), diags);
     }

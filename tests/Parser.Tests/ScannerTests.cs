@@ -60,8 +60,8 @@ public class ScannerTests
     {
         var line = DocumentParser.Parse("  wire 10 AWG   # sized for drop   \n").Tree.Lines[0];
         Assert.Equal(["wire", "10", "AWG"], line.Tokens.Select(t => t.Text));
-        Assert.Equal("# sized for drop", line.Comment!.Text);
-        Assert.Equal(16, line.Comment.Column);
+        Assert.Equal("# sized for drop", line.Comment!.Value.Text);
+        Assert.Equal(16, line.Comment!.Value.Column);
     }
 
     [Fact]
@@ -69,7 +69,7 @@ public class ScannerTests
     {
         var line = DocumentParser.Parse("project \"Line #3 \\\"north\\\"\" # note\n").Tree.Lines[0];
         Assert.Equal("Line #3 \"north\"", line.Tokens[1].StringValue);
-        Assert.Equal("# note", line.Comment!.Text);
+        Assert.Equal("# note", line.Comment!.Value.Text);
     }
 
     [Fact]

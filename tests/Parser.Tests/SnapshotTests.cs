@@ -38,7 +38,7 @@ public class SnapshotTests
                 case LineKind.Blank:
                     continue;
                 case LineKind.Comment:
-                    sb.Append($"{n,3} comment {line.Comment!.Text}\n");
+                    sb.Append($"{n,3} comment {line.Comment!.Value.Text}\n");
                     continue;
                 case LineKind.ConflictMarker:
                     sb.Append($"{n,3} conflict-marker\n");

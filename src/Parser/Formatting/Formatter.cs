@@ -78,7 +78,7 @@ public static class Formatter
             // A comment-only line takes the indentation of the statement it introduces.
             var depth = NextDepth(lines, index);
             var indent = depth >= 0 ? Repeat(depth) : line.Content[..line.IndentWidth];
-            return indent + line.Comment!.Text;
+            return indent + line.Comment!.Value.Text;
         }
 
         var code = Repeat(line.Depth) + Canonical(statement);

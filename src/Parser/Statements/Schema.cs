@@ -9,9 +9,16 @@ public enum ArgKind { Tag, Text, Power, Voltage, Phases, Current, Length, Temper
 /// <summary>One accepted word for an enumerated argument: how the formatter writes it, what it means, and other spellings.</summary>
 public sealed record WordChoice(string Canonical, object Value, string Doc, params string[] Aliases)
 {
-    public bool Matches(string text) =>
-        string.Equals(text, Canonical, StringComparison.OrdinalIgnoreCase)
-        || Aliases.Any(a => string.Equals(text, a, StringComparison.OrdinalIgnoreCase));
+    public bool Matches(string text)
+    {
+        if (string.Equals(text, Canonical, StringComparison.OrdinalIgnoreCase)) return true;
+        foreach (var a in Aliases)
+        {
+            if (string.Equals(text, a, StringComparison.OrdinalIgnoreCase)) return true;
+        }
+
+        return false;
+    }
 }
 
 /// <summary>

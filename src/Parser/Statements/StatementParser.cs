@@ -88,8 +88,7 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         {
             case LexicalValue.Word w:
             {
-                var slot = FirstOpen(spec, filled, a => a.Kind == ArgKind.Word && a.Choices!.Any(c => c.Matches(w.Text))
-                                                        || a.Kind == ArgKind.Phases && w.Text.Equals("dc", StringComparison.OrdinalIgnoreCase));
+                var slot = FirstOpenForWord(spec, filled, w.Text);
                 if (slot >= 0)
                 {
                     var a = spec.Args[slot];
@@ -138,8 +137,7 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
 
             case LexicalValue.Number n:
             {
-                var kinds = KindsFor(n.Unit);
-                var slot = FirstOpen(spec, filled, a => kinds.Contains(a.Kind));
+                var slot = FirstOpenForUnit(spec, filled, n.Unit);
                 if (slot < 0)
                 {
                     var expected = ExpectedSuffix(spec, filled);
@@ -271,15 +269,16 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
             }
 
             var v = reader.Read(t.Text);
-            var nextWord = i + 1 < tokens.Length && tokens[i + 1].Kind == TokenKind.Word ? tokens[i + 1] : null;
-            if (v is LexicalValue.Number { UnitText: "" } bare && nextWord is not null && Units.TryParse(nextWord.Text, out var unit))
+            var hasNext = i + 1 < tokens.Length && tokens[i + 1].Kind == TokenKind.Word;
+            var nextWord = hasNext ? tokens[i + 1] : default;
+            if (v is LexicalValue.Number { UnitText: "" } bare && hasNext && Units.TryParse(nextWord.Text, out var unit))
             {
                 items.Add(new Item(t, nextWord, bare with { Unit = unit, UnitText = nextWord.Text }));
                 i++;
                 continue;
             }
 
-            if (v is LexicalValue.Parallel { Size: null } p && nextWord is not null)
+            if (v is LexicalValue.Parallel { Size: null } p && hasNext)
             {
                 // "2x 250 kcmil" is three tokens: the prefix, the number and the unit.
                 var sizeTokens = i + 2 < tokens.Length && tokens[i + 2].Kind == TokenKind.Word && Units.TryParse(tokens[i + 2].Text, out _) ? 2 : 1;
@@ -308,18 +307,46 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         return -1;
     }
 
-    private static ArgKind[] KindsFor(Unit unit) => unit switch
+    // The two searches below run for nearly every value, so they are loops without closures.
+    private static int FirstOpenForWord(KeywordSpec spec, Argument?[] filled, string text)
     {
-        Unit.Hp or Unit.Kw => [ArgKind.Power],
-        Unit.Volt => [ArgKind.Voltage],
-        Unit.Amp => [ArgKind.Current],
-        Unit.Foot or Unit.Metre => [ArgKind.Length],
-        Unit.Celsius or Unit.Fahrenheit => [ArgKind.Temperature],
-        Unit.Percent => [ArgKind.Percent],
-        Unit.Kva => [ArgKind.ApparentPower],
-        Unit.Minute => [ArgKind.Duration],
-        Unit.Phase => [ArgKind.Phases],
-        _ => [ArgKind.Number, ArgKind.Integer],
+        for (var i = 0; i < spec.Args.Length; i++)
+        {
+            if (filled[i] is not null) continue;
+            var a = spec.Args[i];
+            if (a.Kind == ArgKind.Phases && text.Equals("dc", StringComparison.OrdinalIgnoreCase)) return i;
+            if (a.Kind != ArgKind.Word) continue;
+            foreach (var c in a.Choices!)
+            {
+                if (c.Matches(text)) return i;
+            }
+        }
+
+        return -1;
+    }
+
+    private static int FirstOpenForUnit(KeywordSpec spec, Argument?[] filled, Unit unit)
+    {
+        for (var i = 0; i < spec.Args.Length; i++)
+        {
+            if (filled[i] is null && Accepts(spec.Args[i].Kind, unit)) return i;
+        }
+
+        return -1;
+    }
+
+    private static bool Accepts(ArgKind kind, Unit unit) => unit switch
+    {
+        Unit.Hp or Unit.Kw => kind == ArgKind.Power,
+        Unit.Volt => kind == ArgKind.Voltage,
+        Unit.Amp => kind == ArgKind.Current,
+        Unit.Foot or Unit.Metre => kind == ArgKind.Length,
+        Unit.Celsius or Unit.Fahrenheit => kind == ArgKind.Temperature,
+        Unit.Percent => kind == ArgKind.Percent,
+        Unit.Kva => kind == ArgKind.ApparentPower,
+        Unit.Minute => kind == ArgKind.Duration,
+        Unit.Phase => kind == ArgKind.Phases,
+        _ => kind is ArgKind.Number or ArgKind.Integer,
     };
 
     private static string ExpectedSuffix(KeywordSpec spec, Argument?[] filled)

@@ -14,6 +14,8 @@ internal static class LineScanner
     public static ImmutableArray<SyntaxLine> Scan(string text, int start, List<Diagnostic> diagnostics)
     {
         var lines = ImmutableArray.CreateBuilder<SyntaxLine>();
+        var pool = new StringPool();
+        var tokens = new List<SyntaxToken>();
         var conflictOpen = false;
         var offset = start;
         var index = 0;
@@ -41,9 +43,9 @@ internal static class LineScanner
                 ending = "\n";
             }
 
-            var content = text.Substring(offset, contentEnd - offset);
+            var content = text.AsSpan(offset, contentEnd - offset);
             var inConflict = TrackConflict(content, index, ref conflictOpen, diagnostics);
-            lines.Add(ScanLine(index, offset - start, content, ending, inConflict, diagnostics));
+            lines.Add(ScanLine(text, index, offset, start, content, ending, inConflict, diagnostics, pool, tokens));
             index++;
             if (next > text.Length) break;
             offset = next;
@@ -52,7 +54,7 @@ internal static class LineScanner
         return lines.ToImmutable();
     }
 
-    private static bool TrackConflict(string content, int line, ref bool open, List<Diagnostic> diagnostics)
+    private static bool TrackConflict(ReadOnlySpan<char> content, int line, ref bool open, List<Diagnostic> diagnostics)
     {
         if (content.StartsWith("<<<<<<<", StringComparison.Ordinal))
         {
@@ -72,9 +74,10 @@ internal static class LineScanner
         return true;
     }
 
-    private static SyntaxLine ScanLine(int index, int offset, string content, string ending, bool inConflict,
-        List<Diagnostic> diagnostics)
+    private static SyntaxLine ScanLine(string text, int index, int offset, int start, ReadOnlySpan<char> content, string ending,
+        bool inConflict, List<Diagnostic> diagnostics, StringPool pool, List<SyntaxToken> tokens)
     {
+        tokens.Clear();
         var i = 0;
         var hasTab = false;
         while (i < content.Length && (content[i] == ' ' || content[i] == '\t'))
@@ -84,7 +87,6 @@ internal static class LineScanner
         }
 
         var indent = i;
-        var tokens = ImmutableArray.CreateBuilder<SyntaxToken>();
         SyntaxToken? comment = null;
         while (i < content.Length)
         {
@@ -99,7 +101,7 @@ internal static class LineScanner
             {
                 var end = content.Length;
                 while (end > i && (content[end - 1] == ' ' || content[end - 1] == '\t')) end--;
-                comment = new SyntaxToken(TokenKind.Comment, index, i, content[i..end]);
+                comment = new SyntaxToken(TokenKind.Comment, index, i, content[i..end].ToString());
                 break;
             }
 
@@ -113,19 +115,20 @@ internal static class LineScanner
                         SourceRange.OnLine(index, startCol, i - startCol), "this string has no closing quote (\")"));
                 }
 
-                tokens.Add(new SyntaxToken(TokenKind.String, index, startCol, content[startCol..i]));
+                tokens.Add(new SyntaxToken(TokenKind.String, index, startCol, content[startCol..i].ToString()));
                 continue;
             }
 
             while (i < content.Length && content[i] is not (' ' or '\t' or '"' or '#')) i++;
-            tokens.Add(new SyntaxToken(TokenKind.Word, index, startCol, content[startCol..i]));
+            tokens.Add(new SyntaxToken(TokenKind.Word, index, startCol, pool.Get(content[startCol..i])));
         }
 
-        return new SyntaxLine(index, offset, content, ending, indent, hasTab, tokens.ToImmutable(), comment, inConflict);
+        return new SyntaxLine(index, offset - start, text, offset, content.Length, ending, indent, hasTab,
+            ImmutableArray.CreateRange(tokens), comment, inConflict);
     }
 
     /// <summary>Returns the index after the closing quote, or the line's end when there is none.</summary>
-    private static int ScanString(string content, int i, out bool closed)
+    private static int ScanString(ReadOnlySpan<char> content, int i, out bool closed)
     {
         while (i < content.Length)
         {

@@ -12,12 +12,19 @@ public enum LineKind { Blank, Comment, Statement, ConflictMarker }
 /// </summary>
 public sealed class SyntaxLine
 {
-    internal SyntaxLine(int index, int offset, string content, string lineEnding, int indentWidth, bool indentHasTab,
+    private readonly string _source;
+    private readonly int _start;
+    private readonly int _length;
+    private string? _content;
+
+    internal SyntaxLine(int index, int offset, string source, int start, int length, string lineEnding, int indentWidth, bool indentHasTab,
         ImmutableArray<SyntaxToken> tokens, SyntaxToken? comment, bool inConflict)
     {
         Index = index;
         Offset = offset;
-        Content = content;
+        _source = source;
+        _start = start;
+        _length = length;
         LineEnding = lineEnding;
         IndentWidth = indentWidth;
         IndentHasTab = indentHasTab;
@@ -31,8 +38,12 @@ public sealed class SyntaxLine
     /// <summary>Offset of the first character of the line in the document text (after any BOM).</summary>
     public int Offset { get; }
 
-    /// <summary>The line without its ending.</summary>
-    public string Content { get; }
+    /// <summary>The line without its ending. Sliced from the document on first use, to keep parsing light.</summary>
+    public string Content => _content ??= _source.Substring(_start, _length);
+
+    public ReadOnlySpan<char> ContentSpan => _source.AsSpan(_start, _length);
+
+    public int Length => _length;
 
     /// <summary>"\n", "\r\n" or "" for a last line without one.</summary>
     public string LineEnding { get; }
@@ -59,27 +70,28 @@ public sealed class SyntaxLine
     public bool IsBroken { get; internal set; }
 
     public LineKind Kind =>
-        IsConflictMarker(Content) && InConflict ? LineKind.ConflictMarker
+        InConflict && IsConflictMarker(ContentSpan) ? LineKind.ConflictMarker
         : Tokens.Length > 0 ? LineKind.Statement
         : Comment is not null ? LineKind.Comment
         : LineKind.Blank;
 
-    internal static bool IsConflictMarker(string content) =>
+    internal static bool IsConflictMarker(ReadOnlySpan<char> content) =>
         content.StartsWith("<<<<<<<", StringComparison.Ordinal) || content.StartsWith(">>>>>>>", StringComparison.Ordinal)
         || content.StartsWith("=======", StringComparison.Ordinal) || content.StartsWith("|||||||", StringComparison.Ordinal);
 
     /// <summary>Rebuilds the line from its pieces; equal to Content + LineEnding when positions are right.</summary>
     public string Print()
     {
-        var sb = new System.Text.StringBuilder(Content.Length + 2);
+        var content = ContentSpan;
+        var sb = new System.Text.StringBuilder(content.Length + 2);
         var col = 0;
-        foreach (var t in Tokens.Append(Comment).OfType<SyntaxToken>())
+        foreach (var t in Comment is { } c ? Tokens.Add(c) : Tokens)
         {
-            sb.Append(Content, col, t.Column - col).Append(t.Text);
+            sb.Append(content[col..t.Column]).Append(t.Text);
             col = t.EndColumn;
         }
 
-        sb.Append(Content, col, Content.Length - col).Append(LineEnding);
+        sb.Append(content[col..]).Append(LineEnding);
         return sb.ToString();
     }
 }

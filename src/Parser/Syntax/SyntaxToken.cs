@@ -8,7 +8,7 @@ public enum TokenKind { Word, String, Comment }
 /// One token on one line. Its position is stored here and nowhere else; offsets are derived
 /// from the line's start when needed.
 /// </summary>
-public sealed record SyntaxToken(TokenKind Kind, int Line, int Column, string Text)
+public readonly record struct SyntaxToken(TokenKind Kind, int Line, int Column, string Text)
 {
     public int Length => Text.Length;
 
