@@ -1,0 +1,18 @@
+using MotorLang.Sizing.Domain;
+
+namespace MotorLang.Sizing.Rules;
+
+/// <summary>
+/// What the tables need to know about a motor. <paramref name="Volts"/> is the motor's rated
+/// voltage when known, otherwise the system voltage; the table headnotes map either to a column.
+/// </summary>
+public sealed record MotorRating(
+    decimal Power,
+    bool Kilowatts,
+    decimal Volts,
+    Phases Phases,
+    MotorKind Kind = MotorKind.Induction,
+    DesignLetter? Design = null,
+    Efficiency Efficiency = Efficiency.Standard,
+    NameplateBasis Basis = NameplateBasis.None,
+    decimal? NameplateAmps = null);

@@ -1,0 +1,115 @@
+using MotorLang.Sizing.Domain;
+using MotorLang.Sizing.Tables;
+
+namespace MotorLang.Sizing.Rules;
+
+/// <summary>What 430.52 needs besides the full-load current.</summary>
+public sealed record ProtectionInput(
+    decimal FullLoadAmps,
+    ProtectiveDevice Device,
+    Phases Phases,
+    MotorKind Kind = MotorKind.Induction,
+    DesignLetter? Design = null,
+    Efficiency Efficiency = Efficiency.Standard,
+    bool HardStart = false);
+
+/// <summary>
+/// Motor branch-circuit short-circuit and ground-fault protection, 430.52. The limits are far
+/// above the conductor ampacity on purpose: the overloads protect the conductors against
+/// overload, and this device must ride through locked-rotor inrush. 240.4(D) does not apply.
+/// </summary>
+public static class ShortCircuitProtection
+{
+    /// <summary>The largest rating (or, for an instantaneous-trip breaker, setting) the code permits.</summary>
+    public static Result<decimal> Maximum(ProtectionInput p)
+    {
+        var steps = new List<Step>();
+        var (row, rowName) = Row(p);
+        var percent = Percent(row, p.Device);
+        var fuse = p.Device is ProtectiveDevice.NonTimeDelayFuse or ProtectiveDevice.DualElementFuse;
+        steps.Add(new Step("Table percentage", Format.Percent(percent), "NEC Table 430.52(C)(1)", $"{rowName}, {DeviceName(p.Device)}"));
+        var raw = p.FullLoadAmps * percent / 100m;
+        steps.Add(Step.Amps("Calculated limit", raw, "NEC 430.52(C)(1)", $"{Format.Amps(p.FullLoadAmps)} × {Format.Percent(percent)}"));
+
+        if (p.Device == ProtectiveDevice.InstantaneousTripBreaker)
+        {
+            if (p.HardStart)
+            {
+                var hard = row == "design-b-premium" ? 1700m : 1300m;
+                var hardLimit = p.FullLoadAmps * hard / 100m;
+                steps.Add(Step.Amps("Maximum setting (not sufficient to start)", hardLimit, "NEC 430.52(C)(3)(b)(2)",
+                    $"{Format.Percent(hard)} of full-load current where the table setting will not start the motor"));
+                return new Result<decimal>(hardLimit, [.. steps]);
+            }
+
+            steps.Add(Step.Amps("Maximum setting", raw, "NEC 430.52(C)(3)", "an adjustable instantaneous-trip breaker is set, not rounded to a standard rating"));
+            return new Result<decimal>(raw, [.. steps]);
+        }
+
+        if (p.HardStart)
+        {
+            var (limitPercent, rule) = HardStartPercent(p, fuse);
+            var limit = p.FullLoadAmps * limitPercent / 100m;
+            var rating = StandardRatings.AtOrBelow(limit, fuse);
+            if (rating is null) return Result<decimal>.Missing($"no standard rating at or below {Format.Amps(limit)}", [.. steps]);
+            steps.Add(Step.Amps("Maximum rating (not sufficient to start)", rating.Value, rule,
+                $"{Format.Percent(limitPercent)} × {Format.Amps(p.FullLoadAmps)} = {Format.Amps(limit)}, not to be exceeded"));
+            return new Result<decimal>(rating, [.. steps]);
+        }
+
+        if (StandardRatings.IsStandard(raw, fuse))
+        {
+            steps.Add(Step.Amps("Maximum rating", raw, "NEC 430.52(C)(1)", "the calculated value is a standard rating"));
+            return new Result<decimal>(raw, [.. steps]);
+        }
+
+        var next = StandardRatings.AtOrAbove(raw, fuse);
+        if (next is null) return Result<decimal>.Missing($"no standard rating above {Format.Amps(raw)}", [.. steps]);
+        steps.Add(Step.Amps("Maximum rating", next.Value, "NEC 430.52(C)(1)(a), 240.6(A)",
+            "the next higher standard rating is permitted where the percentage falls between sizes"));
+        return new Result<decimal>(next, [.. steps]);
+    }
+
+    /// <summary>The Table 430.52(C)(1) row a motor falls in, with its description.</summary>
+    public static (string Row, string Name) Row(ProtectionInput p) => p switch
+    {
+        { Phases: Phases.Dc } or { Kind: MotorKind.Dc } => ("dc", "dc (constant voltage) motor"),
+        { Phases: Phases.Single } => ("single-phase", "single-phase motor"),
+        { Kind: MotorKind.WoundRotor } => ("wound-rotor", "wound-rotor motor"),
+        { Kind: MotorKind.Synchronous } => ("synchronous", "synchronous motor"),
+        { Design: DesignLetter.B, Efficiency: Efficiency.Premium } => ("design-b-premium", "design B premium efficiency motor"),
+        _ => ("squirrel-cage", "squirrel-cage motor other than design B premium efficiency"),
+    };
+
+    public static decimal Percent(string row, ProtectiveDevice device)
+    {
+        var t = CodeTables.ProtectionPercent;
+        return CsvTable.Number(t.Rows.First(r => r[0] == row)[t.Column(ColumnName(device))])!.Value;
+    }
+
+    /// <summary>430.52(C)(1)(b): the maximums where the table rating will not carry the starting current.</summary>
+    private static (decimal Percent, string Rule) HardStartPercent(ProtectionInput p, bool fuse) => p.Device switch
+    {
+        ProtectiveDevice.NonTimeDelayFuse when p.FullLoadAmps * 4 > 600 => (300m, "NEC 430.52(C)(1)(b)(4)"),
+        ProtectiveDevice.NonTimeDelayFuse => (400m, "NEC 430.52(C)(1)(b)(1)"),
+        ProtectiveDevice.DualElementFuse => (225m, "NEC 430.52(C)(1)(b)(2)"),
+        _ when p.FullLoadAmps <= 100 => (400m, "NEC 430.52(C)(1)(b)(3)"),
+        _ => (300m, "NEC 430.52(C)(1)(b)(3)"),
+    };
+
+    private static string ColumnName(ProtectiveDevice d) => d switch
+    {
+        ProtectiveDevice.NonTimeDelayFuse => "non-time-delay-fuse",
+        ProtectiveDevice.DualElementFuse => "dual-element-fuse",
+        ProtectiveDevice.InstantaneousTripBreaker => "instantaneous-trip-breaker",
+        _ => "inverse-time-breaker",
+    };
+
+    public static string DeviceName(ProtectiveDevice d) => d switch
+    {
+        ProtectiveDevice.NonTimeDelayFuse => "non-time-delay fuse",
+        ProtectiveDevice.DualElementFuse => "dual-element (time-delay) fuse",
+        ProtectiveDevice.InstantaneousTripBreaker => "instantaneous-trip breaker",
+        _ => "inverse-time breaker",
+    };
+}

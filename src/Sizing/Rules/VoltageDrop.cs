@@ -1,0 +1,60 @@
+using MotorLang.Sizing.Domain;
+using MotorLang.Sizing.Tables;
+
+namespace MotorLang.Sizing.Rules;
+
+/// <summary>A voltage drop in volts and as a percentage of the system voltage.</summary>
+public readonly record struct Drop(decimal Volts, decimal Percent);
+
+/// <summary>
+/// Voltage drop from Chapter 9 Table 9 (ac) or Table 8 (dc). The 3 % branch and 5 % total figures
+/// are informational notes (210.19 IN No. 4, 215.2 IN No. 2), so callers warn rather than fail.
+/// </summary>
+public static class VoltageDrop
+{
+    private static readonly decimal Sqrt3 = 1.7320508075688772935274463415m;
+
+    /// <summary>
+    /// Effective impedance Ze = R × PF + X × sin(arccos PF) (Table 9 note 2); drop = √3 × I × Ze × L / 1000
+    /// for three-phase (line to line), 2 × I × Ze × L / 1000 for single-phase; Table 8 resistance for dc.
+    /// </summary>
+    public static Result<Drop> Of(decimal amps, decimal lengthFeet, WireSpec wire, decimal volts, Phases phases,
+        ConductorMaterial material, RacewayType raceway, decimal powerFactor)
+    {
+        string rule;
+        decimal ze;
+        string how;
+        if (phases == Phases.Dc)
+        {
+            var row8 = CodeTables.RowFor(CodeTables.DcResistance, wire.Size)!;
+            ze = CsvTable.Number(row8[CodeTables.DcResistance.Column(material == ConductorMaterial.Copper ? "r_cu" : "r_al")])!.Value;
+            rule = "NEC Chapter 9 Table 8";
+            how = $"dc resistance {Format.Number(ze)} Ω/1000 ft";
+        }
+        else
+        {
+            var t = CodeTables.Impedance;
+            var row = CodeTables.RowFor(t, wire.Size);
+            var conduit = raceway == RacewayType.Pvc ? "pvc" : "steel";
+            var r = row is null ? null : CsvTable.Number(row[t.Column($"r_{(material == ConductorMaterial.Copper ? "cu" : "al")}_{conduit}")]);
+            var x = row is null ? null : CsvTable.Number(row[t.Column(raceway == RacewayType.Pvc ? "xl_pvc" : "xl_steel")]);
+            if (r is null || x is null)
+                return Result<Drop>.Missing($"Chapter 9 Table 9 has no {wire.Size} row for this conductor");
+            var sin = (decimal)Math.Sqrt(1 - (double)(powerFactor * powerFactor));
+            ze = r.Value * powerFactor + x.Value * sin;
+            rule = "NEC Chapter 9 Table 9, note 2";
+            how = $"R {Format.Number(r.Value)} × {Format.Number(powerFactor)} + X {Format.Number(x.Value)} × {sin:0.###} = {ze:0.####} Ω/1000 ft";
+        }
+
+        var factor = phases == Phases.Three ? Sqrt3 : 2m;
+        var dropVolts = factor * amps * ze * lengthFeet / 1000m / wire.Sets;
+        var percent = dropVolts / volts * 100m;
+        return Result<Drop>.Of(new Drop(dropVolts, percent),
+            new Step("Effective impedance", $"{ze:0.####} Ω/1000 ft", rule, how),
+            new Step("Voltage drop", $"{Format.Number(dropVolts)} V ({percent:0.##} %)", rule,
+                $"{(phases == Phases.Three ? "√3" : "2")} × {Format.Amps(amps)} × Ze × {Format.Number(lengthFeet)} ft ÷ 1000{(wire.Sets > 1 ? $" ÷ {wire.Sets} sets" : "")}"));
+    }
+
+    /// <summary>Power factor assumed at locked rotor for starting drop: common practice, no source.</summary>
+    public const decimal StartingPowerFactor = 0.35m;
+}

@@ -1,0 +1,33 @@
+using System.Collections.Immutable;
+using System.Globalization;
+
+namespace MotorLang.Sizing;
+
+/// <summary>
+/// One step of a calculation, as a reviewer would check it against the code book: what was
+/// found, its value with unit, the rule it comes from, and one line of explanation.
+/// </summary>
+public sealed record Step(string Label, string Value, string Rule, string Note)
+{
+    public static Step Amps(string label, decimal amps, string rule, string note) => new(label, Format.Amps(amps), rule, note);
+}
+
+/// <summary>A computed value with the steps that led to it, or the reason it could not be computed.</summary>
+public sealed record Result<T>(T? Value, ImmutableArray<Step> Steps, string? Unavailable = null) where T : struct
+{
+    public bool HasValue => Value is not null;
+
+    public static Result<T> Of(T value, params Step[] steps) => new(value, [.. steps]);
+
+    public static Result<T> Missing(string why, params Step[] steps) => new(null, [.. steps], why);
+}
+
+/// <summary>How values are written in steps. Amperes keep two decimals at most; nothing is rounded in the arithmetic itself.</summary>
+public static class Format
+{
+    public static string Number(decimal v) => v.ToString("0.##", CultureInfo.InvariantCulture);
+
+    public static string Amps(decimal a) => Number(a) + " A";
+
+    public static string Percent(decimal p) => Number(p) + " %";
+}

@@ -1,0 +1,127 @@
+using System.Globalization;
+using System.Reflection;
+
+namespace MotorLang.Sizing.Tables;
+
+/// <summary>
+/// A code table stored as CSV under Tables/: '#' lines name the source, the first other line
+/// names the columns, "-" marks a cell the table leaves empty. Embedded in the assembly.
+/// </summary>
+public sealed class CsvTable
+{
+    private readonly Dictionary<string, int> _columnIndex;
+
+    private CsvTable(string name, string source, string[] columns, List<string[]> rows)
+    {
+        Name = name;
+        Source = source;
+        Columns = columns;
+        Rows = rows;
+        _columnIndex = columns.Select((c, i) => (c, i)).ToDictionary(p => p.c, p => p.i, StringComparer.OrdinalIgnoreCase);
+    }
+
+    public string Name { get; }
+
+    /// <summary>The header comment: which table, which edition, where it was checked.</summary>
+    public string Source { get; }
+
+    public IReadOnlyList<string> Columns { get; }
+
+    public IReadOnlyList<string[]> Rows { get; }
+
+    public static CsvTable Load(string name)
+    {
+        var resource = $"MotorLang.Sizing.Tables.{name}.csv";
+        using var stream = Assembly.GetExecutingAssembly().GetManifestResourceStream(resource)
+                           ?? throw new InvalidOperationException($"code table '{name}' is not embedded");
+        using var reader = new StreamReader(stream);
+        var source = new List<string>();
+        string[]? columns = null;
+        var rows = new List<string[]>();
+        while (reader.ReadLine() is { } line)
+        {
+            if (line.StartsWith('#'))
+            {
+                source.Add(line.TrimStart('#', ' '));
+                continue;
+            }
+
+            if (line.Trim().Length == 0) continue;
+            var cells = line.Split(',').Select(c => c.Trim()).ToArray();
+            if (columns is null)
+            {
+                columns = cells;
+                continue;
+            }
+
+            if (cells.Length != columns.Length)
+                throw new InvalidDataException($"{name}.csv: row '{line}' has {cells.Length} cells, the header has {columns.Length}");
+            rows.Add(cells);
+        }
+
+        if (columns is null || rows.Count == 0) throw new InvalidDataException($"{name}.csv has no rows");
+        if (source.Count == 0) throw new InvalidDataException($"{name}.csv does not name its source");
+        return new CsvTable(name, string.Join(" ", source), columns, rows);
+    }
+
+    public int Column(string name) =>
+        _columnIndex.TryGetValue(name, out var i) ? i : throw new InvalidDataException($"{Name}.csv has no column '{name}'");
+
+    public bool HasColumn(string name) => _columnIndex.ContainsKey(name);
+
+    /// <summary>A numeric cell, or null for "-".</summary>
+    public static decimal? Number(string cell) =>
+        cell == "-" ? null : Numbers.Parse(cell) ?? throw new InvalidDataException($"'{cell}' is not a number");
+
+    /// <summary>Checks that a column of keys rises strictly from row to row (tables are looked up by "first row at or above").</summary>
+    public void RequireAscending(int column)
+    {
+        for (var i = 1; i < Rows.Count; i++)
+        {
+            if (Number(Rows[i][column]) <= Number(Rows[i - 1][column]))
+                throw new InvalidDataException($"{Name}.csv: column '{Columns[column]}' is not in rising order at row {i + 1}");
+        }
+    }
+}
+
+/// <summary>Reads the numbers the tables print: decimals, fractions (1/2) and mixed numbers (1-1/2).</summary>
+public static class Numbers
+{
+    public static decimal? Parse(string text)
+    {
+        var dash = text.IndexOf('-', 1 < text.Length ? 1 : 0);
+        var slash = text.IndexOf('/');
+        if (slash < 0)
+            return decimal.TryParse(text, NumberStyles.Number, CultureInfo.InvariantCulture, out var d) ? d : null;
+        var whole = 0m;
+        var fraction = text;
+        if (dash > 0)
+        {
+            if (!decimal.TryParse(text[..dash], NumberStyles.Number, CultureInfo.InvariantCulture, out whole)) return null;
+            fraction = text[(dash + 1)..];
+        }
+
+        var parts = fraction.Split('/');
+        if (parts.Length != 2 || !decimal.TryParse(parts[0], CultureInfo.InvariantCulture, out var n)
+                              || !decimal.TryParse(parts[1], CultureInfo.InvariantCulture, out var m) || m == 0)
+            return null;
+        return whole + n / m;
+    }
+
+    /// <summary>A horsepower as the tables print it: 1/2, 7-1/2, 15.</summary>
+    public static string Horsepower(decimal hp)
+    {
+        var whole = decimal.Truncate(hp);
+        var frac = hp - whole;
+        var fracText = frac switch
+        {
+            0.5m => "1/2", 0.25m => "1/4", 0.75m => "3/4",
+            _ when Math.Abs(frac - 1m / 3) < 0.001m => "1/3",
+            _ when Math.Abs(frac - 1m / 6) < 0.001m => "1/6",
+            _ => null,
+        };
+        if (frac == 0) return whole.ToString(CultureInfo.InvariantCulture);
+        if (fracText is null) return hp.ToString("0.###", CultureInfo.InvariantCulture);
+        return whole == 0 ? fracText : $"{whole}-{fracText}";
+    }
+}
