@@ -44,7 +44,9 @@ public static class CodeTables
         {
             foreach (var cell in row.Skip(1))
             {
-                if (cell is not ("yes" or "no")) CsvTable.Number(cell);
+                // Cells are numbers, "-", yes/no flags, or conductor sizes (Table 250.122).
+                if (cell is "yes" or "no" || ConductorSize.All.Any(s => s.Number == cell)) continue;
+                CsvTable.Number(cell);
             }
         }
 
