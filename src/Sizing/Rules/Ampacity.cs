@@ -91,25 +91,25 @@ public static class Ampacity
         return 75;
     }
 
-    /// <summary>The smallest wire (one set, or parallel sets of 1/0 and larger) whose allowable ampacity is at least <paramref name="required"/>.</summary>
+    /// <summary>Largest single conductor chosen before going to parallel sets: common practice, no source.</summary>
+    public static readonly ConductorSize LargestSingle = ConductorSize.Parse("500");
+
+    /// <summary>
+    /// The smallest wire whose allowable ampacity is at least <paramref name="required"/>: one conductor per
+    /// phase up to 500 kcmil, then parallel sets (1/0 and larger, 310.10(G)) of up to 500 kcmil each, as most
+    /// designers would install them; conductors above 500 kcmil only when ten sets would not do.
+    /// </summary>
     public static Result<WireSpec> Minimum(decimal required, InstallationConditions c, bool designBcdMotor = false, ConductorSize? smallest = null)
     {
         var start = smallest ?? ConductorSize.Parse(c.Material == ConductorMaterial.Copper ? "14" : "12");
-        foreach (var size in ConductorSize.All.Where(s => s >= start))
+        var candidates = ConductorSize.All.Where(s => s >= start && s <= LargestSingle).Select(WireSpec.Single)
+            .Concat(Enumerable.Range(2, 9).SelectMany(sets => ConductorSize.All
+                .Where(s => s >= ConductorSize.Parse("1/0") && s >= start && s <= LargestSingle).Select(s => new WireSpec(sets, s))))
+            .Concat(ConductorSize.All.Where(s => s > LargestSingle).Select(WireSpec.Single));
+        foreach (var wire in candidates)
         {
-            var r = Allowable(WireSpec.Single(size), c, designBcdMotor);
-            if (r.Value >= required) return Chosen(WireSpec.Single(size), required, r);
-        }
-
-        // 310.10(G): conductors 1/0 and larger may run in parallel.
-        for (var sets = 2; sets <= 10; sets++)
-        {
-            foreach (var size in ConductorSize.All.Where(s => s >= ConductorSize.Parse("1/0")))
-            {
-                var wire = new WireSpec(sets, size);
-                var r = Allowable(wire, c, designBcdMotor);
-                if (r.Value >= required) return Chosen(wire, required, r);
-            }
+            var r = Allowable(wire, c, designBcdMotor);
+            if (r.Value >= required) return Chosen(wire, required, r);
         }
 
         return Result<WireSpec>.Missing($"no conductor arrangement up to 10 parallel sets carries {Format.Amps(required)}");

@@ -71,6 +71,8 @@ public static class MotorCurrent
         }
 
         var rows = table.Rows.Select(r => Numbers.Parse(r[0])!.Value).ToList();
+        // The synchronous columns start at 25 hp: smaller synchronous motors are not in the table at all.
+        if (ReferenceEquals(table, CodeTables.SynchronousFlc) && hp < rows[0]) return null;
         var tableHp = rows.FirstOrDefault(r => r >= hp);
         if (tableHp == 0) return null;
         if (tableHp != hp)
