@@ -1,0 +1,97 @@
+using System.Text;
+
+namespace MotorLang.Cli.Tests;
+
+/// <summary>The commands, run in-process with captured output, on files in a temporary folder.</summary>
+public sealed class CliTests : IDisposable
+{
+    private readonly string _dir = Directory.CreateTempSubdirectory("motorlang-cli-").FullName;
+
+    public void Dispose() => Directory.Delete(_dir, recursive: true);
+
+    private (int Code, string Out, string Err) Run(params string[] args)
+    {
+        var stdout = new StringWriter();
+        var stderr = new StringWriter();
+        var code = CommandLine.Run(args, stdout, stderr);
+        return (code, stdout.ToString(), stderr.ToString());
+    }
+
+    private string Write(string name, string text)
+    {
+        var path = Path.Combine(_dir, name);
+        File.WriteAllText(path, text);
+        return path;
+    }
+
+    [Fact]
+    public void CheckReportsFileLineColumnSeverityCodeAndMessage()
+    {
+        var path = Write("a.motors", "feeder F 480V 3ph\n  lenght 10ft\n");
+        var (code, output, _) = Run("check", path);
+        Assert.Equal(1, code);
+        Assert.Equal($"{path}:2:3: error P001: unknown keyword 'lenght'; did you mean 'length'?", output.Trim());
+    }
+
+    [Fact]
+    public void CheckOfACleanFileExitsZero()
+    {
+        var (code, output, err) = Run("check", Write("ok.motors", "feeder F 480V 3ph\n  motor M 5hp\n"));
+        Assert.Equal(0, code);
+        Assert.Equal("", output);
+        Assert.Contains("1 file checked: 0 errors", err);
+    }
+
+    [Fact]
+    public void MissingFilesAndEmptyFoldersAreUsageErrors()
+    {
+        var (code, _, err) = Run("check", Path.Combine(_dir, "nope.motors"));
+        Assert.Equal(2, code);
+        Assert.Contains("no such file or folder", err);
+        Assert.DoesNotContain("   at ", err);
+
+        var empty = Directory.CreateDirectory(Path.Combine(_dir, "empty")).FullName;
+        Assert.Equal(2, Run("check", empty).Code);
+    }
+
+    [Fact]
+    public void NonUtf8FilesAreRefusedWithAClearMessage()
+    {
+        var path = Path.Combine(_dir, "latin1.motors");
+        File.WriteAllBytes(path, [.. Encoding.ASCII.GetBytes("project \"Caf"), 0xE9, .. Encoding.ASCII.GetBytes("\"\n")]);
+        var (code, _, err) = Run("check", path);
+        Assert.Equal(2, code);
+        Assert.Contains("not UTF-8", err);
+    }
+
+    [Fact]
+    public void UnknownOptionsAreUsageErrors()
+    {
+        Assert.Equal(2, Run("check", "--bogus").Code);
+        Assert.Equal(2, Run("frobnicate").Code);
+    }
+
+    [Fact]
+    public void FmtRewritesInPlaceAndKeepsTheBom()
+    {
+        var path = Path.Combine(_dir, "f.motors");
+        File.WriteAllBytes(path, [0xEF, 0xBB, 0xBF, .. Encoding.UTF8.GetBytes("FEEDER F 480v 3PH\r\n    motor M 5 hp # note\r\n")]);
+        var (code, output, _) = Run("fmt", path);
+        Assert.Equal(0, code);
+        Assert.Contains("formatted", output);
+        Assert.Equal([0xEF, 0xBB, 0xBF, .. Encoding.UTF8.GetBytes("feeder F 480V 3ph\r\n  motor M 5hp    # note\r\n")], File.ReadAllBytes(path));
+        Assert.Empty(Directory.GetFiles(_dir, "*.tmp"));
+    }
+
+    [Fact]
+    public void FmtCheckChangesNothingAndExitsOneWhenAFileWouldChange()
+    {
+        var messy = Write("m.motors", "feeder F 480v 3ph\n");
+        var tidy = Write("t.motors", "feeder F 480V 3ph\n");
+        var (code, output, _) = Run("fmt", "--check", _dir);
+        Assert.Equal(1, code);
+        Assert.Equal($"{messy}: would be reformatted", output.Trim());
+        Assert.Equal("feeder F 480v 3ph\n", File.ReadAllText(messy));
+        Assert.Equal(0, Run("fmt", "--check", tidy).Code);
+    }
+}
