@@ -1,5 +1,6 @@
 using System.CommandLine;
-using MotorLang.Parser;
+using MotorLang.Analysis;
+using MotorLang.Analysis.Findings;
 using MotorLang.Parser.Diagnostics;
 
 namespace MotorLang.Cli;
@@ -17,8 +18,8 @@ public static class CheckCommand
             int errors = 0, warnings = 0;
             foreach (var file in files)
             {
-                var parsed = DocumentParser.Parse(SourceFiles.Read(file));
-                foreach (var d in parsed.Diagnostics)
+                var analysis = Analyzer.Analyze(SourceFiles.Read(file));
+                foreach (var d in analysis.Findings)
                 {
                     stdout.WriteLine(Describe(file, d));
                     if (d.Severity == Severity.Error) errors++;
@@ -32,6 +33,6 @@ public static class CheckCommand
         return command;
     }
 
-    public static string Describe(string file, Diagnostic d) =>
+    public static string Describe(string file, Finding d) =>
         $"{file}:{d.Range.Start.Line + 1}:{d.Range.Start.Column + 1}: {d.Severity.ToString().ToLowerInvariant()} {d.Code}: {d.Message}";
 }

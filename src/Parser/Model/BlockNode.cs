@@ -89,6 +89,7 @@ public abstract class CircuitNode(Statement header, BlockNode? parent) : BlockNo
     public Located<Quantity>? Length => Get<Quantity>("length", "length");
     public Located<WireSpec>? Wire => Get<WireSpec>("wire", "size");
     public Located<WireSpec>? Ground => Get<WireSpec>("ground", "size");
+    public Located<Quantity>? Conduit => Get<Quantity>("conduit", "trade-size");
     public Located<ProtectiveDevice>? Protection => Get<ProtectiveDevice>("protection", "device");
     public Located<Quantity>? ProtectionRating => Get<Quantity>("protection", "rating");
 }
@@ -99,6 +100,9 @@ public sealed class FeederNode(Statement header, ProjectNode? project) : Circuit
     private readonly List<LoadNode> _loads = [];
 
     public override string Keyword => "feeder";
+
+    /// <summary>The document's model, for resolving tags; set once the whole document is read.</summary>
+    public MotorList? Model { get; internal set; }
     public Located<Quantity>? Voltage => Get<Quantity>("feeder", "voltage");
     public Located<Phases>? Phases => Get<Phases>("feeder", "phases");
     public Located<string>? From => Get<string>("from", "source");

@@ -10,6 +10,7 @@ public sealed class MotorList
         Project = project;
         Feeders = feeders;
         _byTag = byTag;
+        foreach (var f in feeders) f.Model = this;
     }
 
     public ProjectNode? Project { get; }

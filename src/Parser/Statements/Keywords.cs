@@ -137,6 +137,8 @@ public static class Keywords
         new("length", [Feeder, Motor], null, [new("length", Length, true, Check: NotNegative)], "One-way circuit length, for voltage drop."),
         new("wire", [Feeder, Motor], null, [new("size", Wire, true)], "Phase conductor size as installed: 10 AWG, 4/0 AWG, 250 kcmil, 2x 250 kcmil."),
         new("ground", [Feeder, Motor], null, [new("size", Wire, true)], "Equipment grounding conductor size as installed."),
+        new("conduit", [Feeder, Motor], null, [new("trade-size", TradeSize, true, Check: Positive)],
+            "Raceway trade size as installed, for the conduit-fill check (Chapter 9 Table 4)."),
         new("protection", [Feeder, Motor], null,
             [new("device", Word, true, Devices), new("rating", Current, false, Check: Positive)],
             "Short-circuit and ground-fault protective device and its rating."),

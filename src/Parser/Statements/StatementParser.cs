@@ -346,6 +346,7 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         Unit.Kva => kind == ArgKind.ApparentPower,
         Unit.Minute => kind == ArgKind.Duration,
         Unit.Phase => kind == ArgKind.Phases,
+        Unit.Inch => kind == ArgKind.TradeSize,
         _ => kind is ArgKind.Number or ArgKind.Integer,
     };
 
@@ -372,6 +373,7 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         ArgKind.Word => $"a {a.Name} ({string.Join(", ", a.Choices!.Take(8).Select(c => c.Canonical))})",
         ArgKind.Duration => "a time rating (5min, 15min, 30min or 60min)",
         ArgKind.ApparentPower => "an apparent power (e.g. 15kVA)",
+        ArgKind.TradeSize => "a trade size in inches (e.g. 3/4in, 1-1/4in)",
         _ => a.Name,
     };
 

@@ -1,7 +1,7 @@
 namespace MotorLang.Parser.Values;
 
 /// <summary>The units the format knows, each with the one spelling the formatter writes.</summary>
-public enum Unit { None, Hp, Kw, Volt, Amp, Foot, Metre, Celsius, Fahrenheit, Percent, Kva, Minute, Phase, Awg, Kcmil }
+public enum Unit { None, Hp, Kw, Volt, Amp, Foot, Metre, Celsius, Fahrenheit, Percent, Kva, Minute, Phase, Awg, Kcmil, Inch }
 
 public static class Units
 {
@@ -10,7 +10,7 @@ public static class Units
         ["hp"] = Unit.Hp, ["kw"] = Unit.Kw, ["v"] = Unit.Volt, ["a"] = Unit.Amp,
         ["ft"] = Unit.Foot, ["m"] = Unit.Metre, ["c"] = Unit.Celsius, ["°c"] = Unit.Celsius,
         ["f"] = Unit.Fahrenheit, ["°f"] = Unit.Fahrenheit, ["%"] = Unit.Percent, ["kva"] = Unit.Kva,
-        ["min"] = Unit.Minute, ["ph"] = Unit.Phase, ["awg"] = Unit.Awg, ["kcmil"] = Unit.Kcmil, ["mcm"] = Unit.Kcmil,
+        ["min"] = Unit.Minute, ["ph"] = Unit.Phase, ["awg"] = Unit.Awg, ["kcmil"] = Unit.Kcmil, ["mcm"] = Unit.Kcmil, ["in"] = Unit.Inch,
     };
 
     public static bool TryParse(string text, out Unit unit) => Spellings.TryGetValue(text, out unit);
@@ -19,7 +19,7 @@ public static class Units
     {
         Unit.Hp => "hp", Unit.Kw => "kW", Unit.Volt => "V", Unit.Amp => "A", Unit.Foot => "ft", Unit.Metre => "m",
         Unit.Celsius => "C", Unit.Fahrenheit => "F", Unit.Percent => "%", Unit.Kva => "kVA", Unit.Minute => "min",
-        Unit.Phase => "ph", Unit.Awg => "AWG", Unit.Kcmil => "kcmil", _ => "",
+        Unit.Phase => "ph", Unit.Awg => "AWG", Unit.Kcmil => "kcmil", Unit.Inch => "in", _ => "",
     };
 
     /// <summary>What a value with this unit measures, for messages ("expected a current").</summary>
@@ -35,6 +35,7 @@ public static class Units
         Unit.Minute => "a time rating (min)",
         Unit.Phase => "a phase count (1ph or 3ph)",
         Unit.Awg or Unit.Kcmil => "a wire size (AWG or kcmil)",
+        Unit.Inch => "a raceway trade size (in)",
         _ => "a plain number",
     };
 }

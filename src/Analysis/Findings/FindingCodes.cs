@@ -1,0 +1,28 @@
+namespace MotorLang.Analysis.Findings;
+
+/// <summary>
+/// Stable codes for sizing findings, documented in docs/checks.md. Never renumber. M1xx are
+/// errors against a code rule, M2xx warnings, M3xx information (values not written yet).
+/// </summary>
+public static class FindingCodes
+{
+    public const string WireUndersized = "M101";
+    public const string ProtectionTooLarge = "M102";
+    public const string OverloadTooLarge = "M103";
+    public const string DisconnectTooSmall = "M104";
+    public const string ControllerTooSmall = "M105";
+    public const string GroundUndersized = "M106";
+    public const string FeederWireUndersized = "M107";
+    public const string FeederProtectionTooLarge = "M108";
+    public const string ConduitOverfilled = "M109";
+    public const string VoltageMismatch = "M110";
+    public const string NeedsNameplate = "M111";
+
+    public const string ProtectionMayTrip = "M201";
+    public const string VoltageDropHigh = "M202";
+    public const string OverloadMissing = "M203";
+    public const string CannotCheck = "M204";
+    public const string OverloadAboveRunningLimit = "M205";
+
+    public const string NotWritten = "M301";
+}

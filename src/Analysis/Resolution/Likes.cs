@@ -1,0 +1,33 @@
+using MotorLang.Parser.Model;
+
+namespace MotorLang.Analysis.Resolution;
+
+/// <summary>Attributes of a motor, looked up on the motor and then along its chain of 'like' references.</summary>
+public static class Likes
+{
+    /// <summary>The motor, then the motor it is like, and so on; stops at a cycle or an unknown tag.</summary>
+    public static IEnumerable<MotorNode> Chain(MotorNode motor)
+    {
+        var seen = new HashSet<MotorNode>();
+        var model = Root(motor);
+        for (MotorNode? m = motor; m is not null && seen.Add(m); m = m.Like is { } l ? model?.Find(l.Value) as MotorNode : null)
+        {
+            yield return m;
+        }
+    }
+
+    /// <summary>The first value found along the chain, with the motor it was written on.</summary>
+    public static (Located<T> Value, MotorNode Owner)? Get<T>(MotorNode motor, Func<MotorNode, Located<T>?> get)
+    {
+        foreach (var m in Chain(motor))
+        {
+            if (get(m) is { } v) return (v, m);
+        }
+
+        return null;
+    }
+
+    public static bool Has(MotorNode motor, Func<MotorNode, bool> has) => Chain(motor).Any(has);
+
+    private static MotorList? Root(MotorNode motor) => motor.Feeder.Model;
+}

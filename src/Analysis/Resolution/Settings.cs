@@ -1,0 +1,65 @@
+using MotorLang.Parser.Model;
+using MotorLang.Parser.Values;
+using MotorLang.Sizing.Domain;
+using MotorLang.Sizing.Rules;
+
+namespace MotorLang.Analysis.Resolution;
+
+/// <summary>
+/// The installation settings in force for a block: its own, else its parent's, up to the project,
+/// else the defaults below. Each value remembers the block it came from, for hovers.
+/// </summary>
+public sealed record Settings(
+    decimal AmbientCelsius,
+    ConductorMaterial Material,
+    string Insulation,
+    int InsulationRating,
+    int? TerminationRating,
+    RacewayType Raceway,
+    int CurrentCarrying,
+    decimal BranchDropLimit,
+    decimal TotalDropLimit,
+    decimal PowerFactor)
+{
+    /// <summary>Defaults where nothing is written: 30 °C (the table base), copper THWN (75 °C), EMT, three conductors, 3 % / 5 %, PF 0.85.</summary>
+    public static readonly Settings Defaults = new(30m, ConductorMaterial.Copper, "THWN", 75, null, RacewayType.Emt, 3, 3m, 5m, 0.85m);
+
+    public InstallationConditions Conditions => new(Material, InsulationRating, TerminationRating, AmbientCelsius, CurrentCarrying, Raceway, Insulation);
+
+    public static Settings For(BlockNode block)
+    {
+        var chain = new List<BlockNode>();
+        for (BlockNode? b = block; b is not null; b = b.Parent) chain.Add(b);
+        if (block is MotorNode motor)
+        {
+            // A motor written "like" another takes that motor's own settings before its feeder's.
+            chain.InsertRange(1, LikeChain(motor));
+        }
+
+        T Pick<T>(Func<BlockNode, Located<T>?> get, T fallback)
+        {
+            foreach (var b in chain)
+            {
+                if (get(b) is { } v) return v.Value;
+            }
+
+            return fallback;
+        }
+
+        var d = Defaults;
+        var conductorBlock = chain.FirstOrDefault(b => b.Material is not null);
+        return new Settings(
+            Pick(b => b.Ambient, new Quantity(d.AmbientCelsius, Unit.Celsius)) is var amb ? Conversions.Celsius(amb) : d.AmbientCelsius,
+            conductorBlock?.Material?.Value ?? d.Material,
+            conductorBlock?.Insulation?.Value ?? d.Insulation,
+            conductorBlock?.InsulationRating?.Value ?? (conductorBlock is null ? d.InsulationRating : 75),
+            conductorBlock?.Termination is { } t ? (int)Conversions.Celsius(t.Value) : null,
+            Pick(b => b.Raceway, d.Raceway),
+            Pick(b => b.CurrentCarrying, d.CurrentCarrying),
+            Pick(b => b.BranchDropLimit, new Quantity(d.BranchDropLimit, Unit.Percent)).Value,
+            Pick(b => b.TotalDropLimit, new Quantity(d.TotalDropLimit, Unit.Percent)).Value,
+            Pick(b => b.PowerFactor, d.PowerFactor));
+    }
+
+    private static IEnumerable<BlockNode> LikeChain(MotorNode motor) => Likes.Chain(motor).Skip(1);
+}

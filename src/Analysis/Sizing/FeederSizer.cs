@@ -1,0 +1,165 @@
+using MotorLang.Analysis.Findings;
+using MotorLang.Analysis.Fixes;
+using MotorLang.Analysis.Resolution;
+using MotorLang.Parser.Diagnostics;
+using MotorLang.Parser.Model;
+using MotorLang.Parser.Text;
+using MotorLang.Sizing;
+using MotorLang.Sizing.Domain;
+using MotorLang.Sizing.Rules;
+
+namespace MotorLang.Analysis.Sizing;
+
+/// <summary>
+/// Sizes feeders (430.24, 430.62(A)) from the motors and loads they supply, including those on
+/// feeders supplied from them ('from'), so a switchboard feeder carries its motor control centers.
+/// </summary>
+internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode, MotorResult> motors, EditBuilder edits, List<Finding> findings)
+{
+    private static readonly decimal Sqrt3 = 1.7320508075688772935274463415m;
+
+    public FeederResult Size(FeederNode feeder)
+    {
+        var r = new FeederResult(feeder);
+        if (feeder.Voltage is not { } volts || feeder.Phases is not { } phases) return r;
+        r.Volts = volts.Value.Value;
+        r.Phases = phases.Value;
+        var settings = Settings.For(feeder);
+        var supplied = Downstream(feeder).ToList();
+        var motorResults = supplied.SelectMany(f => f.Motors).Select(m => motors.GetValueOrDefault(m)).OfType<MotorResult>().ToList();
+        if (motorResults.Any(m => !m.FullLoadCurrent.HasValue))
+        {
+            findings.Add(new Finding(FindingCodes.CannotCheck, Severity.Warning, feeder.Header.KeywordToken.Range,
+                "the feeder cannot be sized: a motor it supplies has no full-load current (see that motor's findings)"));
+            return r;
+        }
+
+        var feederMotors = motorResults.Select(m => new FeederMotor(m.Tag, m.FullLoadCurrent.Value!.Value, m.MaximumProtection?.Value, m.Quantity, m.DutyCycleAmps)).ToList();
+        var loads = supplied.SelectMany(f => f.Loads).Select(l => LoadOf(l, r.Volts, r.Phases)).OfType<FeederLoad>().ToList();
+        r.CalculatedLoad = feederMotors.Sum(m => m.FullLoadAmps * m.Quantity) + loads.Sum(l => l.Amps);
+        r.RequiredAmpacity = Feeders.RequiredAmpacity(feederMotors, loads);
+        var device = feeder.Protection?.Value ?? ProtectiveDevice.InverseTimeBreaker;
+        r.MaximumProtection = Feeders.MaximumProtection(feederMotors, loads, fuse: device is ProtectiveDevice.DualElementFuse or ProtectiveDevice.NonTimeDelayFuse);
+        r.ProtectionRating = feeder.ProtectionRating?.Value.Value;
+        var required = r.RequiredAmpacity.Value!.Value;
+        if (required > 0) r.MinimumWire = Ampacity.Minimum(required, settings.Conditions);
+
+        CheckWire(feeder, r, required, settings);
+        CheckProtection(feeder, r);
+        CheckGround(feeder, r, settings);
+        return r;
+    }
+
+    /// <summary>Voltage drop along the feeder at its running load, then cumulative from the source.</summary>
+    public void Drops(IReadOnlyDictionary<FeederNode, FeederResult> feeders)
+    {
+        foreach (var r in feeders.Values)
+        {
+            var f = r.Feeder;
+            var wire = r.Wire ?? r.MinimumWire?.Value;
+            if (f.Length is not { } length || wire is null || r.CalculatedLoad == 0) continue;
+            var settings = Settings.For(f);
+            r.Drop = VoltageDrop.Of(r.CalculatedLoad, Conversions.Feet(length.Value), wire.Value, r.Volts, r.Phases, settings.Material, settings.Raceway, settings.PowerFactor);
+        }
+
+        foreach (var r in feeders.Values)
+        {
+            decimal total = 0;
+            var seen = new HashSet<FeederNode>();
+            for (FeederNode? f = r.Feeder; f is not null && seen.Add(f); f = f.From is { } from ? model.Find(from.Value) as FeederNode : null)
+            {
+                total += feeders.GetValueOrDefault(f)?.Drop?.Value?.Percent ?? 0;
+            }
+
+            r.CumulativeDropPercent = total;
+        }
+    }
+
+    private void CheckWire(FeederNode feeder, FeederResult r, decimal required, Settings settings)
+    {
+        if (feeder.Wire is not { } wire)
+        {
+            if (r.MinimumWire?.Value is { } min)
+                Add(FindingCodes.NotWritten, Severity.Information, feeder.Header.KeywordToken.Range,
+                    $"no feeder wire given; NEC 430.24 needs {Format.Amps(required)}: {min}",
+                    new Fix("Add the minimum feeder wire", [edits.Insert(feeder, $"wire {min}")]));
+            return;
+        }
+
+        r.Wire = wire.Value;
+        r.WireAmpacity = Ampacity.Allowable(wire.Value, settings.Conditions);
+        if (r.WireAmpacity.Value is { } allowable && allowable < required && r.MinimumWire?.Value is { } minimum)
+            Add(FindingCodes.FeederWireUndersized, Severity.Error, wire.Range,
+                $"feeder wire {wire.Value} carries {Format.Amps(allowable)} here; NEC 430.24 requires {Format.Amps(required)}: use {minimum}",
+                new Fix($"Change the feeder wire to {minimum}", [EditBuilder.Replace(feeder.Statements["wire"].Arg("size")!, minimum.ToString())]));
+    }
+
+    private void CheckProtection(FeederNode feeder, FeederResult r)
+    {
+        if (r.MaximumProtection?.Value is not { } max) return;
+        var text = $"{Format.Number(max)}A";
+        if (feeder.Protection is null)
+        {
+            Add(FindingCodes.NotWritten, Severity.Information, feeder.Header.KeywordToken.Range,
+                $"no feeder protection given; NEC 430.62(A) allows up to {Format.Amps(max)}",
+                new Fix("Add the maximum feeder protection", [edits.Insert(feeder, $"protection inverse-time-breaker {text}")]));
+            return;
+        }
+
+        if (feeder.ProtectionRating is not { } rating)
+        {
+            Add(FindingCodes.NotWritten, Severity.Information, feeder.Protection.Range,
+                $"no rating given; NEC 430.62(A) allows up to {Format.Amps(max)}",
+                new Fix("Add the maximum rating", [EditBuilder.Append(feeder.Statements["protection"], text)]));
+            return;
+        }
+
+        if (rating.Value.Value > max)
+            Add(FindingCodes.FeederProtectionTooLarge, Severity.Error, rating.Range,
+                $"feeder protection {Format.Amps(rating.Value.Value)} is above the {Format.Amps(max)} NEC 430.62(A) allows (largest branch device plus the other loads, rounded down)",
+                new Fix($"Change the rating to {text}", [EditBuilder.Replace(feeder.Statements["protection"].Arg("rating")!, text)]));
+    }
+
+    private void CheckGround(FeederNode feeder, FeederResult r, Settings settings)
+    {
+        if ((r.ProtectionRating ?? r.MaximumProtection?.Value) is not { } device) return;
+        r.MinimumGround = Grounding.Minimum(device, settings.Material, r.Wire, r.MinimumWire?.Value, "NEC 250.122(A)");
+        if (r.MinimumGround.Value is not { } min) return;
+        if (feeder.Ground is not { } ground)
+        {
+            Add(FindingCodes.NotWritten, Severity.Information, feeder.Header.KeywordToken.Range,
+                $"no grounding conductor given; NEC 250.122 needs {min}", new Fix("Add the grounding conductor", [edits.Insert(feeder, $"ground {min}")]));
+            return;
+        }
+
+        r.Ground = ground.Value.Size;
+        if (ground.Value.Size < min)
+            Add(FindingCodes.GroundUndersized, Severity.Error, ground.Range,
+                $"grounding conductor {ground.Value.Size} is smaller than the {min} NEC 250.122 requires for {Format.Amps(device)}",
+                new Fix($"Change the grounding conductor to {min}", [EditBuilder.Replace(feeder.Statements["ground"].Arg("size")!, min.ToString())]));
+    }
+
+    /// <summary>The feeder and every feeder supplied from it, directly or further down.</summary>
+    private IEnumerable<FeederNode> Downstream(FeederNode feeder)
+    {
+        var seen = new HashSet<FeederNode>();
+        var queue = new Queue<FeederNode>([feeder]);
+        while (queue.Count > 0)
+        {
+            var f = queue.Dequeue();
+            if (!seen.Add(f)) continue;
+            yield return f;
+            foreach (var child in model.Feeders.Where(c => c.From is { } from && model.Find(from.Value) == f)) queue.Enqueue(child);
+        }
+    }
+
+    private static FeederLoad? LoadOf(LoadNode load, decimal volts, Phases phases)
+    {
+        var amps = load.Current?.Value.Value
+                   ?? (load.ApparentPower is { } kva ? kva.Value.Value * 1000m / (phases == Phases.Three ? volts * Sqrt3 : volts) : (decimal?)null);
+        return amps is null ? null : new FeederLoad(load.Tag?.Value ?? "", amps.Value, load.Continuous);
+    }
+
+    private void Add(string code, Severity severity, SourceRange range, string message, Fix? fix = null) =>
+        findings.Add(new Finding(code, severity, range, message, fix));
+}

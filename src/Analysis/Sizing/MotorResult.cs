@@ -1,0 +1,65 @@
+using MotorLang.Parser.Model;
+using MotorLang.Sizing;
+using MotorLang.Sizing.Domain;
+using MotorLang.Sizing.Rules;
+
+namespace MotorLang.Analysis.Sizing;
+
+/// <summary>Everything computed for one motor, each value with its steps. Null where it could not be computed.</summary>
+public sealed class MotorResult(MotorNode motor)
+{
+    public MotorNode Motor { get; } = motor;
+    public string Tag => Motor.Tag?.Value ?? "";
+    public decimal Horsepower { get; internal set; }
+    public decimal Volts { get; internal set; }
+    public Phases Phases { get; internal set; }
+    public int Quantity { get; internal set; } = 1;
+    public Result<decimal> FullLoadCurrent { get; internal set; } = Result<decimal>.Missing("not computed");
+    public Result<decimal>? RequiredAmpacity { get; internal set; }
+    public Result<WireSpec>? MinimumWire { get; internal set; }
+    public WireSpec? Wire { get; internal set; }
+    public Result<decimal>? WireAmpacity { get; internal set; }
+    public ProtectiveDevice Device { get; internal set; } = ProtectiveDevice.InverseTimeBreaker;
+    public decimal? ProtectionRating { get; internal set; }
+    public Result<decimal>? MaximumProtection { get; internal set; }
+    public decimal? Overload { get; internal set; }
+    public Result<decimal>? OverloadLimit { get; internal set; }
+    public Result<decimal>? OverloadAbsoluteLimit { get; internal set; }
+    public Result<DisconnectRating>? Disconnect { get; internal set; }
+    public Result<decimal>? Controller { get; internal set; }
+    public Result<int>? NemaStarter { get; internal set; }
+    public string? NemaStarterSize { get; internal set; }
+    public ConductorSize? Ground { get; internal set; }
+    public Result<ConductorSize>? MinimumGround { get; internal set; }
+    public Result<Drop>? BranchDrop { get; internal set; }
+    public decimal? TotalDropPercent { get; internal set; }
+    public Result<TradeSize>? MinimumConduit { get; internal set; }
+    public decimal? ConduitFillPercent { get; internal set; }
+    public Result<CurrentRange>? LockedRotorFromCodeLetter { get; internal set; }
+    public Result<decimal>? LockedRotorTableMaximum { get; internal set; }
+
+    /// <summary>The current this motor adds to its feeder under 430.24 (its duty-cycle current when it has one).</summary>
+    public decimal? DutyCycleAmps { get; internal set; }
+}
+
+/// <summary>Everything computed for one feeder.</summary>
+public sealed class FeederResult(FeederNode feeder)
+{
+    public FeederNode Feeder { get; } = feeder;
+    public string Tag => Feeder.Tag?.Value ?? "";
+    public decimal Volts { get; internal set; }
+    public Phases Phases { get; internal set; }
+    /// <summary>Running load: the full-load currents of every motor supplied through it plus its other loads, at 100 %.</summary>
+    public decimal CalculatedLoad { get; internal set; }
+    public Result<decimal>? RequiredAmpacity { get; internal set; }
+    public Result<WireSpec>? MinimumWire { get; internal set; }
+    public WireSpec? Wire { get; internal set; }
+    public Result<decimal>? WireAmpacity { get; internal set; }
+    public decimal? ProtectionRating { get; internal set; }
+    public Result<decimal>? MaximumProtection { get; internal set; }
+    public ConductorSize? Ground { get; internal set; }
+    public Result<ConductorSize>? MinimumGround { get; internal set; }
+    public Result<Drop>? Drop { get; internal set; }
+    /// <summary>Drop from the source to this feeder's load end, through the feeders it is supplied from.</summary>
+    public decimal? CumulativeDropPercent { get; internal set; }
+}
