@@ -53,6 +53,7 @@ public static class Analyzer
             motors[motor] = Guard(() => motorSizer.Size(motor), motor.Header.KeywordToken.Range, findings) ?? new MotorResult(motor);
         }
 
+        ShareInheritedFixes(motorSizer.Inherited, findings);
         var feederSizer = new FeederSizer(model, motors, edits, findings);
         var feeders = new Dictionary<FeederNode, FeederResult>();
         foreach (var feeder in model.Feeders)
@@ -64,6 +65,22 @@ public static class Analyzer
         TotalDrops(motors, feeders, findings);
         var ordered = findings.OrderBy(f => f.Range.Start).ThenBy(f => f.Code, StringComparer.Ordinal).ToImmutableArray();
         return new AnalysisResult(parse, motors, feeders, ordered);
+    }
+
+    /// <summary>
+    /// A motor written "like" another shares that motor's mistakes. Where the other motor reports the
+    /// same problem, the fix belongs there, so this one keeps its finding but loses its own fix.
+    /// </summary>
+    private static void ShareInheritedFixes(List<(Finding Finding, MotorNode Owner)> inherited, List<Finding> findings)
+    {
+        foreach (var (finding, owner) in inherited)
+        {
+            var atSource = findings.Any(f => f.Code == finding.Code && f != finding
+                                             && f.Range.Start.Line >= owner.Header.Line.Index && f.Range.Start.Line <= owner.LastLine);
+            if (!atSource) continue;
+            var i = findings.IndexOf(finding);
+            findings[i] = finding with { Fix = null, Message = $"{finding.Message} (inherited from {owner.Tag?.Value}; fix it there)" };
+        }
     }
 
     private static void TotalDrops(Dictionary<MotorNode, MotorResult> motors, Dictionary<FeederNode, FeederResult> feeders, List<Finding> findings)

@@ -1,38 +1,72 @@
 using System.CommandLine;
+using System.Text.Json;
 using MotorLang.Analysis;
 using MotorLang.Analysis.Findings;
+using MotorLang.Cli.Output;
 using MotorLang.Parser.Diagnostics;
+using Spectre.Console;
 
 namespace MotorLang.Cli;
 
-/// <summary>`motorlang check`: report every problem as file:line:col: severity code: message.</summary>
+/// <summary>`motorlang check`: every finding as text, JSON or SARIF; exit 1 when there are errors.</summary>
 public static class CheckCommand
 {
     public static Command Create(TextWriter stdout, TextWriter stderr)
     {
         var paths = new Argument<string[]>("paths") { Description = "Motor-list files or folders", Arity = ArgumentArity.OneOrMore };
-        var command = new Command("check", "Check motor lists and report problems") { paths };
+        var format = new Option<string>("--format") { Description = "text, json or sarif", DefaultValueFactory = _ => "text" };
+        format.AcceptOnlyFromAmong("text", "json", "sarif");
+        var command = new Command("check", "Check motor lists against the code and report problems") { paths, format };
         command.SetAction(result =>
         {
             var files = SourceFiles.Expand(result.GetValue(paths)!);
-            int errors = 0, warnings = 0;
-            foreach (var file in files)
+            var reports = Analyze(files, stderr);
+            var all = reports.SelectMany(r => r.Findings).ToList();
+            switch (result.GetValue(format))
             {
-                var analysis = Analyzer.Analyze(SourceFiles.Read(file));
-                foreach (var d in analysis.Findings)
-                {
-                    stdout.WriteLine(Describe(file, d));
-                    if (d.Severity == Severity.Error) errors++;
-                    else if (d.Severity == Severity.Warning) warnings++;
-                }
+                case "json":
+                    stdout.WriteLine(JsonReport.Write(reports).ToJsonString(JsonReport.Options));
+                    break;
+                case "sarif":
+                    stdout.WriteLine(SarifReport.Write(reports, typeof(CheckCommand).Assembly.GetName().Version?.ToString() ?? "0").ToJsonString(JsonReport.Options));
+                    break;
+                default:
+                    foreach (var (file, findings) in reports)
+                    {
+                        foreach (var f in findings) stdout.WriteLine(FindingText.Line(file, f));
+                    }
+
+                    break;
             }
 
+            int errors = all.Count(f => f.Severity == Severity.Error), warnings = all.Count(f => f.Severity == Severity.Warning);
             stderr.WriteLine($"{files.Count} file{(files.Count == 1 ? "" : "s")} checked: {errors} error{(errors == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")}");
             return errors > 0 ? ExitCodes.Findings : ExitCodes.Clean;
         });
         return command;
     }
 
-    public static string Describe(string file, Finding d) =>
-        $"{file}:{d.Range.Start.Line + 1}:{d.Range.Start.Column + 1}: {d.Severity.ToString().ToLowerInvariant()} {d.Code}: {d.Message}";
+    /// <summary>Analyzes each file; with many files on an interactive terminal, shows progress on stderr.</summary>
+    private static List<(string File, IReadOnlyList<Finding> Findings)> Analyze(IReadOnlyList<string> files, TextWriter stderr)
+    {
+        var reports = new List<(string, IReadOnlyList<Finding>)>();
+        void One(string file) => reports.Add((file, Analyzer.Analyze(SourceFiles.Read(file)).Findings));
+        if (files.Count < 20 || Console.IsErrorRedirected || stderr != Console.Error)
+        {
+            foreach (var f in files) One(f);
+            return reports;
+        }
+
+        var console = AnsiConsole.Create(new AnsiConsoleSettings { Out = new AnsiConsoleOutput(Console.Error) });
+        console.Progress().Start(ctx =>
+        {
+            var task = ctx.AddTask("checking", maxValue: files.Count);
+            foreach (var f in files)
+            {
+                One(f);
+                task.Increment(1);
+            }
+        });
+        return reports;
+    }
 }

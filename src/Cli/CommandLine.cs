@@ -10,6 +10,9 @@ public static class CommandLine
         var root = new RootCommand("MotorLang: check, format and size motor lists (.motors) against NFPA 70-2023 Article 430.");
         root.Subcommands.Add(CheckCommand.Create(stdout, stderr));
         root.Subcommands.Add(FormatCommand.Create(stdout, stderr));
+        root.Subcommands.Add(ScheduleCommand.Create(stdout));
+        root.Subcommands.Add(SizeCommand.Create(stdout, stderr));
+        root.Subcommands.Add(DiffCommand.Create(stdout));
 
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)

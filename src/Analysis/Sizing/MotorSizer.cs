@@ -16,6 +16,9 @@ namespace MotorLang.Analysis.Sizing;
 /// <summary>Sizes one motor circuit with the sizing core and reports what the motor list gets wrong or leaves out.</summary>
 internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
 {
+    /// <summary>Findings about values a motor inherits through 'like', with the motor they are written on.</summary>
+    public List<(Finding Finding, MotorNode Owner)> Inherited { get; } = [];
+
     public MotorResult Size(MotorNode motor)
     {
         var r = new MotorResult(motor);
@@ -194,6 +197,8 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
         r.Overload = overload?.Value.Value;
         if (overload is null)
         {
+            // 430.33: a duty-cycle motor is protected against overload by its branch device.
+            if (Get(motor, m => m.Duty) is { Value: not DutyKind.Continuous }) return;
             if (r.OverloadLimit.Value is { } limit)
                 Add(FindingCodes.OverloadMissing, Severity.Warning, motor.Header.KeywordToken.Range,
                     $"no overload given; NEC 430.32(A)(1) requires one, rated at most {Format.Amps(limit)}",
@@ -311,8 +316,14 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
     }
 
     /// <summary>A finding about an inherited value is shown on this motor's 'like' line, not on the other motor.</summary>
-    private static SourceRange RangeOn(MotorNode motor, MotorNode? owner, SourceRange valueRange) =>
-        owner is null || owner == motor ? valueRange : motor.Like?.Range ?? motor.Header.KeywordToken.Range;
+    private SourceRange RangeOn(MotorNode motor, MotorNode? owner, SourceRange valueRange)
+    {
+        if (owner is null || owner == motor) return valueRange;
+        _pendingOwner = owner;
+        return motor.Like?.Range ?? motor.Header.KeywordToken.Range;
+    }
+
+    private MotorNode? _pendingOwner;
 
     /// <summary>Replace the value where it is written on this motor, or add an overriding line when it is inherited.</summary>
     private Fix ReplaceOrOverride(MotorNode motor, MotorNode? owner, string keyword, string arg, string value, string title, string? overrideText = null)
@@ -324,8 +335,13 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
 
     private Fix Insert(MotorNode motor, string statement, string title) => new(title, [edits.Insert(motor, statement)]);
 
-    private void Add(string code, Severity severity, SourceRange range, string message, Fix? fix = null) =>
-        findings.Add(new Finding(code, severity, range, message, fix));
+    private void Add(string code, Severity severity, SourceRange range, string message, Fix? fix = null)
+    {
+        var finding = new Finding(code, severity, range, message, fix);
+        findings.Add(finding);
+        if (_pendingOwner is { } owner) Inherited.Add((finding, owner));
+        _pendingOwner = null;
+    }
 
     private static decimal HorsepowerOf(Quantity q) => q.Unit == Unit.Kw ? q.Value / MotorCurrent.KilowattsPerHorsepower : q.Value;
 

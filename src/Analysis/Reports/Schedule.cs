@@ -1,0 +1,81 @@
+using MotorLang.Analysis.Sizing;
+using MotorLang.Sizing;
+using MotorLang.Sizing.Domain;
+using MotorLang.Sizing.Rules;
+using MotorLang.Sizing.Tables;
+
+namespace MotorLang.Analysis.Reports;
+
+/// <summary>One schedule row: computed and specified values side by side, as text ready to print.</summary>
+public sealed record ScheduleRow(
+    string Feeder, string Tag, string Description, string Power, string Volts, string Flc,
+    string MinimumWire, string Wire, string MaximumProtection, string Protection, string OverloadLimit, string Overload,
+    string Disconnect, string MinimumGround, string Ground, string VoltageDrop, string Status)
+{
+    public static readonly string[] Headers =
+    [
+        "Feeder", "Tag", "Description", "Power", "Volts", "FLC", "Min wire", "Wire", "Max protection", "Protection",
+        "Overload limit", "Overload", "Disconnect", "Min ground", "Ground", "Voltage drop", "Status",
+    ];
+
+    public string[] Cells =>
+    [
+        Feeder, Tag, Description, Power, Volts, Flc, MinimumWire, Wire, MaximumProtection, Protection, OverloadLimit, Overload,
+        Disconnect, MinimumGround, Ground, VoltageDrop, Status,
+    ];
+}
+
+/// <summary>A feeder's totals under its motors.</summary>
+public sealed record FeederTotals(string Tag, string Volts, string CalculatedLoad, string RequiredAmpacity, string MinimumWire,
+    string Wire, string MaximumProtection, string Protection, string MinimumGround, string Ground, string VoltageDrop);
+
+/// <summary>The motor schedule of a document: one row per motor, then each feeder's totals.</summary>
+public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<FeederTotals> Feeders)
+{
+    public static Schedule Of(AnalysisResult analysis)
+    {
+        var rows = analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index).Select(m => Row(m, analysis)).ToList();
+        var feeders = analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index).Select(Totals).ToList();
+        return new Schedule(rows, feeders);
+    }
+
+    private static ScheduleRow Row(MotorResult m, AnalysisResult analysis)
+    {
+        var findings = analysis.Findings.Where(f => f.Range.Start.Line >= m.Motor.Header.Line.Index && f.Range.Start.Line <= m.Motor.LastLine).ToList();
+        var status = findings.Any(f => f.Severity == Parser.Diagnostics.Severity.Error)
+            ? string.Join(" ", findings.Where(f => f.Severity == Parser.Diagnostics.Severity.Error).Select(f => f.Code).Distinct())
+            : findings.Any(f => f.Severity == Parser.Diagnostics.Severity.Warning) ? "warnings" : "ok";
+        return new ScheduleRow(
+            m.Motor.Feeder.Tag?.Value ?? "", m.Tag, m.Motor.Description?.Value ?? "",
+            m.Motor.Power is { } p ? p.Value.ToString() + (m.Quantity > 1 ? $" ×{m.Quantity}" : "") : "",
+            m.Volts > 0 ? $"{Format.Number(m.Volts)} V" : "",
+            Amps(m.FullLoadCurrent), Text(m.MinimumWire), m.Wire?.ToString() ?? "",
+            Protection(m), m.ProtectionRating is { } pr ? $"{Format.Amps(pr)} {Short(m.Device)}" : "",
+            Amps(m.OverloadLimit), m.Overload is { } o ? Format.Amps(o) : "",
+            m.Disconnect?.Value is { } d ? $"{Format.Amps(d.MinimumAmps)}, {Numbers.Horsepower(d.MinimumHorsepower)} hp" : "",
+            m.MinimumGround?.Value?.ToString() ?? "", m.Ground?.ToString() ?? "",
+            m.BranchDrop?.Value is { } drop ? $"{drop.Percent:0.##} %" + (m.TotalDropPercent is { } t && t != drop.Percent ? $" ({t:0.##} % total)" : "") : "",
+            status);
+    }
+
+    private static FeederTotals Totals(FeederResult f) => new(
+        f.Tag, f.Volts > 0 ? $"{Format.Number(f.Volts)} V" : "", Format.Amps(f.CalculatedLoad), Amps(f.RequiredAmpacity),
+        Text(f.MinimumWire), f.Wire?.ToString() ?? "", Amps(f.MaximumProtection),
+        f.ProtectionRating is { } p ? Format.Amps(p) : "", f.MinimumGround?.Value?.ToString() ?? "", f.Ground?.ToString() ?? "",
+        f.Drop?.Value is { } d ? $"{d.Percent:0.##} %" : "");
+
+    private static string Protection(MotorResult m) =>
+        m.MaximumProtection?.Value is { } max ? $"{Format.Amps(m.Device == ProtectiveDevice.InstantaneousTripBreaker ? decimal.Floor(max) : max)} {Short(m.Device)}" : "";
+
+    private static string Short(ProtectiveDevice d) => d switch
+    {
+        ProtectiveDevice.InverseTimeBreaker => "ITB",
+        ProtectiveDevice.InstantaneousTripBreaker => "inst.",
+        ProtectiveDevice.DualElementFuse => "DE fuse",
+        _ => "NTD fuse",
+    };
+
+    private static string Amps(Result<decimal>? r) => r?.Value is { } v ? Format.Amps(v) : "";
+
+    private static string Text<T>(Result<T>? r) where T : struct => r?.Value?.ToString() ?? "";
+}

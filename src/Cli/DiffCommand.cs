@@ -1,0 +1,61 @@
+using System.CommandLine;
+using System.Diagnostics;
+using System.Text.Json;
+using MotorLang.Analysis;
+using MotorLang.Analysis.Reports;
+using MotorLang.Cli.Output;
+
+namespace MotorLang.Cli;
+
+/// <summary>`motorlang diff OLD NEW`: what changed between two versions, record by record, with the sizes that moved.</summary>
+public static class DiffCommand
+{
+    public static Command Create(TextWriter stdout)
+    {
+        var oldArg = new Argument<string>("old") { Description = "A file, or a git revision and path such as HEAD~1:plant.motors" };
+        var newArg = new Argument<string>("new") { Description = "A file, or a git revision and path" };
+        var format = new Option<string>("--format") { Description = "text or json", DefaultValueFactory = _ => "text" };
+        format.AcceptOnlyFromAmong("text", "json");
+        var command = new Command("diff", "Compare two versions of a motor list by tag") { oldArg, newArg, format };
+        command.SetAction(result =>
+        {
+            var before = Analyzer.Analyze(Read(result.GetValue(oldArg)!));
+            var after = Analyzer.Analyze(Read(result.GetValue(newArg)!));
+            var changes = ListDiff.Compare(before, after);
+            if (result.GetValue(format) == "json")
+                stdout.WriteLine(JsonSerializer.Serialize(changes, JsonReport.Options));
+            else if (changes.Count == 0)
+                stdout.WriteLine("no changes");
+            else
+                foreach (var c in changes) stdout.WriteLine(ListDiff.Describe(c));
+            return ExitCodes.Clean;
+        });
+        return command;
+    }
+
+    /// <summary>A path on disk, or REV:PATH read with `git show` from the current folder's repository.</summary>
+    public static string Read(string spec)
+    {
+        if (File.Exists(spec)) return SourceFiles.Read(spec);
+        var colon = spec.IndexOf(':');
+        if (colon <= 0) throw new CliException($"cannot read '{spec}': no such file, and not a git revision:path");
+        var info = new ProcessStartInfo("git", ["show", spec])
+        {
+            RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false,
+            StandardOutputEncoding = System.Text.Encoding.UTF8,
+        };
+        try
+        {
+            using var git = Process.Start(info) ?? throw new CliException("cannot start git");
+            var text = git.StandardOutput.ReadToEnd();
+            var error = git.StandardError.ReadToEnd();
+            git.WaitForExit();
+            if (git.ExitCode != 0) throw new CliException($"git cannot show '{spec}': {error.Trim()}");
+            return text;
+        }
+        catch (System.ComponentModel.Win32Exception)
+        {
+            throw new CliException("git is not installed, so revisions cannot be read");
+        }
+    }
+}

@@ -1,0 +1,13 @@
+using MotorLang.Analysis.Findings;
+using MotorLang.Parser.Diagnostics;
+
+namespace MotorLang.Cli.Output;
+
+/// <summary>The one-line text form shared by every command: file:line:col: severity code: message.</summary>
+public static class FindingText
+{
+    public static string Line(string file, Finding f) =>
+        $"{file}:{f.Range.Start.Line + 1}:{f.Range.Start.Column + 1}: {Name(f.Severity)} {f.Code}: {f.Message}";
+
+    public static string Name(Severity s) => s.ToString().ToLowerInvariant();
+}

@@ -1,0 +1,90 @@
+using System.CommandLine;
+using System.Text;
+using System.Text.Json;
+using MotorLang.Analysis;
+using MotorLang.Analysis.Reports;
+using MotorLang.Cli.Output;
+using Spectre.Console;
+
+namespace MotorLang.Cli;
+
+/// <summary>`motorlang schedule`: one row per motor, computed and specified sizes side by side, then feeder totals.</summary>
+public static class ScheduleCommand
+{
+    public static Command Create(TextWriter stdout)
+    {
+        var file = new Argument<string>("file") { Description = "A motor-list file" };
+        var format = new Option<string>("--format") { Description = "table, csv, markdown or json", DefaultValueFactory = _ => "table" };
+        format.AcceptOnlyFromAmong("table", "csv", "markdown", "json");
+        var command = new Command("schedule", "Print the motor schedule with computed and specified sizes") { file, format };
+        command.SetAction(result =>
+        {
+            var path = result.GetValue(file)!;
+            var analysis = Analyzer.Analyze(SourceFiles.Read(SourceFiles.Expand([path])[0]));
+            var schedule = Schedule.Of(analysis);
+            stdout.Write(result.GetValue(format) switch
+            {
+                "csv" => Csv(schedule),
+                "markdown" => Markdown(schedule),
+                "json" => JsonSerializer.Serialize(schedule, JsonReport.Options) + "\n",
+                _ => Table(schedule),
+            });
+            return analysis.HasErrors ? ExitCodes.Findings : ExitCodes.Clean;
+        });
+        return command;
+    }
+
+    private static readonly string[] FeederHeaders =
+        ["Feeder", "Volts", "Load", "Required", "Min wire", "Wire", "Max protection", "Protection", "Min ground", "Ground", "Voltage drop"];
+
+    private static string[] FeederCells(FeederTotals f) =>
+        [f.Tag, f.Volts, f.CalculatedLoad, f.RequiredAmpacity, f.MinimumWire, f.Wire, f.MaximumProtection, f.Protection, f.MinimumGround, f.Ground, f.VoltageDrop];
+
+    public static string Csv(Schedule s)
+    {
+        var sb = new StringBuilder();
+        void Row(IEnumerable<string> cells) => sb.Append(string.Join(",", cells.Select(Quote))).Append('\n');
+        Row(ScheduleRow.Headers);
+        foreach (var r in s.Rows) Row(r.Cells);
+        sb.Append('\n');
+        Row(FeederHeaders);
+        foreach (var f in s.Feeders) Row(FeederCells(f));
+        return sb.ToString();
+    }
+
+    public static string Markdown(Schedule s)
+    {
+        var sb = new StringBuilder();
+        void Row(IEnumerable<string> cells) => sb.Append("| ").Append(string.Join(" | ", cells.Select(c => c.Replace("|", "\\|")))).Append(" |\n");
+        Row(ScheduleRow.Headers);
+        Row(ScheduleRow.Headers.Select(_ => "---"));
+        foreach (var r in s.Rows) Row(r.Cells);
+        sb.Append("\n**Feeders**\n\n");
+        Row(FeederHeaders);
+        Row(FeederHeaders.Select(_ => "---"));
+        foreach (var f in s.Feeders) Row(FeederCells(f));
+        return sb.ToString();
+    }
+
+    private static string Table(Schedule s)
+    {
+        var writer = new StringWriter();
+        var console = AnsiConsole.Create(new AnsiConsoleSettings
+        {
+            Out = new AnsiConsoleOutput(writer), Ansi = AnsiSupport.No, ColorSystem = ColorSystemSupport.NoColors,
+        });
+        console.Profile.Width = 240;
+        var motors = new Table().Border(TableBorder.Simple);
+        foreach (var h in ScheduleRow.Headers.Where(h => h != "Description")) motors.AddColumn(Markup.Escape(h));
+        foreach (var r in s.Rows) motors.AddRow(r.Cells.Where((_, i) => ScheduleRow.Headers[i] != "Description").Select(Markup.Escape).ToArray());
+        console.Write(motors);
+        var feeders = new Table().Border(TableBorder.Simple);
+        foreach (var h in FeederHeaders) feeders.AddColumn(Markup.Escape(h));
+        foreach (var f in s.Feeders) feeders.AddRow(FeederCells(f).Select(Markup.Escape).ToArray());
+        console.Write(feeders);
+        return writer.ToString();
+    }
+
+    private static string Quote(string cell) =>
+        cell.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + cell.Replace("\"", "\"\"") + "\"" : cell;
+}
