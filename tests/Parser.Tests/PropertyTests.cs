@@ -129,6 +129,7 @@ public class PropertyTests
                 return;
             }
 
+            Assert.Equal(once.Text, Text.TextEdits.Apply(text, once.Edits));
             var reparsed = DocumentParser.Parse(once.Text);
             Assert.Equal(Comments(parsed), Comments(reparsed));
             Assert.True(Fingerprint.Same(Fingerprint.Of(parsed), Fingerprint.Of(reparsed)));

@@ -27,6 +27,33 @@ public static class Formatter
     /// <summary>Formats the whole document, or only lines <paramref name="firstLine"/>..<paramref name="lastLine"/> (inclusive).</summary>
     public static FormatResult Format(ParseResult parsed, int firstLine = 0, int lastLine = int.MaxValue)
     {
+        var result = FormatOnce(parsed, firstLine, lastLine);
+        if (!result.Changed || firstLine > 0 || lastLine < int.MaxValue) return result;
+
+        // Re-indenting one line can mend another line's indentation error, which the next pass then
+        // formats. A few passes reach the fixed point, so formatting twice changes nothing.
+        var text = result.Text;
+        for (var pass = 0; pass < 3; pass++)
+        {
+            var next = FormatOnce(DocumentParser.Parse(text), 0, int.MaxValue);
+            if (!next.Changed || !next.Verified) break;
+            text = next.Text;
+        }
+
+        if (text == result.Text) return result;
+        if (!Fingerprint.Same(Fingerprint.Of(DocumentParser.Parse(text)), Fingerprint.Of(parsed))) return result;
+        return new FormatResult(text, [WholeDocument(parsed.Tree, text)], true);
+    }
+
+    private static TextEdit WholeDocument(SyntaxTree tree, string text)
+    {
+        var last = tree.Lines[^1];
+        var end = new TextPosition(last.Index, last.Length);
+        return new TextEdit(new SourceRange(new TextPosition(0, 0), end), tree.HasBom ? text[1..] : text);
+    }
+
+    private static FormatResult FormatOnce(ParseResult parsed, int firstLine, int lastLine)
+    {
         var tree = parsed.Tree;
         var lines = tree.Lines;
         var output = new string?[lines.Length];

@@ -21,10 +21,13 @@ public static class TextEdits
         return sb.ToString();
     }
 
-    /// <summary>Offsets where each line starts, counting only "\n" as a line break ("\r\n" ends with one).</summary>
+    /// <summary>
+    /// Offsets where each line starts, counting only "\n" as a line break ("\r\n" ends with one).
+    /// A byte-order mark is not part of line 0, as positions in the syntax tree do not count it.
+    /// </summary>
     public static List<int> LineStarts(string text)
     {
-        var starts = new List<int> { 0 };
+        var starts = new List<int> { text.Length > 0 && text[0] == '\uFEFF' ? 1 : 0 };
         for (var i = 0; i < text.Length; i++)
         {
             if (text[i] == '\n') starts.Add(i + 1);
