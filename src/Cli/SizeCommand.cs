@@ -2,8 +2,7 @@ using System.CommandLine;
 using System.Text;
 using DiffPlex.DiffBuilder;
 using DiffPlex.DiffBuilder.Model;
-using MotorLang.Analysis;
-using MotorLang.Parser.Text;
+using MotorLang.Analysis.Fixes;
 
 namespace MotorLang.Cli;
 
@@ -19,7 +18,7 @@ public static class SizeCommand
         {
             var path = SourceFiles.Expand([result.GetValue(file)!])[0];
             var before = SourceFiles.Read(path);
-            var after = SizeEverything(before);
+            var after = SizeAll.Apply(before);
             if (after == before)
             {
                 stderr.WriteLine($"{path}: nothing to change");
@@ -36,25 +35,6 @@ public static class SizeCommand
             return ExitCodes.Clean;
         });
         return command;
-    }
-
-    /// <summary>
-    /// Applies all fixes, then analyzes again and repeats (a larger wire can raise the grounding
-    /// conductor), at most four times. Stops early rather than add a syntax error.
-    /// </summary>
-    public static string SizeEverything(string text)
-    {
-        for (var pass = 0; pass < 4; pass++)
-        {
-            var analysis = Analyzer.Analyze(text);
-            var edits = analysis.SizeEverything();
-            if (edits.IsEmpty) break;
-            var next = TextEdits.Apply(text, edits);
-            if (Analyzer.Analyze(next).Parse.Diagnostics.Length > analysis.Parse.Diagnostics.Length) break;
-            text = next;
-        }
-
-        return text;
     }
 
     public static string UnifiedDiff(string path, string before, string after)

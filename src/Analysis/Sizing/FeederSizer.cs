@@ -123,7 +123,11 @@ internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode
     private void CheckGround(FeederNode feeder, FeederResult r, Settings settings)
     {
         if ((r.ProtectionRating ?? r.MaximumProtection?.Value) is not { } device) return;
-        r.MinimumGround = Grounding.Minimum(device, settings.Material, r.Wire, r.MinimumWire?.Value, "NEC 250.122(A)");
+        // 250.122(B) measures upsizing from the smallest conductor that suits the installation; a feeder's
+        // conductors are normally chosen to carry its protective device's rating, so that is the base
+        // (common practice, no source). Anything larger counts as upsized.
+        var baseline = Ampacity.Minimum(Math.Max(r.RequiredAmpacity?.Value ?? 0, device), settings.Conditions).Value;
+        r.MinimumGround = Grounding.Minimum(device, settings.Material, r.Wire ?? r.MinimumWire?.Value, baseline, "NEC 250.122(A)");
         if (r.MinimumGround.Value is not { } min) return;
         if (feeder.Ground is not { } ground)
         {

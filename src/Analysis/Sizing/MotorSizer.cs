@@ -251,9 +251,9 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
         var material = settings.Material;
         var phaseMinimum = r.MinimumWire?.Value;
         if (r.Device == ProtectiveDevice.InstantaneousTripBreaker)
-            r.MinimumGround = Grounding.ForInstantaneousTrip(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency), material, r.Wire, phaseMinimum);
+            r.MinimumGround = Grounding.ForInstantaneousTrip(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency), material, r.Wire ?? phaseMinimum, phaseMinimum);
         else if ((r.ProtectionRating ?? r.MaximumProtection?.Value) is { } device)
-            r.MinimumGround = Grounding.Minimum(device, material, r.Wire, phaseMinimum);
+            r.MinimumGround = Grounding.Minimum(device, material, r.Wire ?? phaseMinimum, phaseMinimum);
         if (r.MinimumGround?.Value is not { } min) return;
 
         var ground = Get(motor, m => m.Ground, out var owner);
