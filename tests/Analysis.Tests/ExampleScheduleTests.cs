@@ -1,0 +1,87 @@
+using MotorLang.Analysis.Findings;
+using MotorLang.Analysis.Reports;
+
+namespace MotorLang.Analysis.Tests;
+
+/// <summary>
+/// The example files against schedules checked by hand with the code tables. Each row's hand
+/// calculation is written beside it (source: hand calculation; tables as named).
+/// </summary>
+public class ExampleScheduleTests
+{
+    private static AnalysisResult Example(string name)
+    {
+        var dir = AppContext.BaseDirectory;
+        while (!File.Exists(Path.Combine(dir, "MotorLang.sln"))) dir = Path.GetDirectoryName(dir)!;
+        return Analyzer.Analyze(File.ReadAllText(Path.Combine(dir, "examples", name)));
+    }
+
+    private static ScheduleRow Row(AnalysisResult a, string tag) => Schedule.Of(a).Rows.Single(r => r.Tag == tag);
+
+    [Fact]
+    public void DairyBottlingHall()
+    {
+        var a = Example("dairy-bottling.motors");
+        Assert.Empty(a.Findings);
+
+        // P-101, 15 hp 480 V: Table 430.250 -> 21 A. 430.22: 26.25 A. THHN at 40 C: x 0.91 (Table 310.15(B)(1)(1));
+        // design B -> 75 C terminations (110.14(C)(1)(a)(4)): 12 AWG = min(30 x 0.91, 25) = 25 A short; 10 AWG = min(36.4, 35) = 35 A.
+        // Dual-element fuse 175 % x 21 = 36.75 -> 40 A (430.52(C)(1)(a)). Overload 125 % x 18.5 = 23.13 A (SF 1.15).
+        // Disconnect 115 % x 21 = 24.15 A. Ground: 35 A fuse -> 10 AWG (Table 250.122).
+        // Drop: Ze = 1.2 x 0.85 + 0.063 x 0.527 = 1.0532 ohm/kft; 1.732 x 21 x 1.0532 x 0.09 = 3.45 V = 0.72 % (Chapter 9 Table 9).
+        Assert.Equal(
+            new ScheduleRow("MCC-B1", "P-101", "Raw milk transfer pump", "15hp", "480 V", "21 A", "10 AWG", "10 AWG", "40 A DE fuse", "35 A DE fuse",
+                "23.13 A", "23 A", "24.15 A, 15 hp", "10 AWG", "10 AWG", "0.72 % (1.37 % total)", "ok"),
+            Row(a, "P-101"));
+
+        // H-201 on a drive: 430.122(A) 125 % x 62 A input = 77.5 A -> 4 AWG (95 x 0.91 = 86.45, 75 C limit 85 A).
+        // Ground: 150 A breaker -> 200 A row -> 6 AWG (Table 250.122).
+        var h = Row(a, "H-201");
+        Assert.Equal(("65 A", "4 AWG", "6 AWG"), (h.Flc, h.MinimumWire, h.MinimumGround));
+
+        // Feeder MCC-B1, 430.24: 1.25 x 65 + (21 + 14 + 14 + 4 x 4.8) + 125 % x 18 A + 6 kVA / (1.732 x 480) = 179.17 A
+        // -> 3/0 AWG (225 x 0.91 = 204.75, 75 C limit 200 A; 2/0 gives 177.45 A). 430.62(A): 175 A (H-201, 250 % x 65 = 162.5 -> 175)
+        // + 68.2 A + 29.72 A of other loads = 272.9 A -> 250 A.
+        var feeder = Schedule.Of(a).Feeders.Single();
+        Assert.Equal(("158.42 A", "179.17 A", "3/0 AWG", "250 A"), (feeder.CalculatedLoad, feeder.RequiredAmpacity, feeder.MinimumWire, feeder.MaximumProtection));
+    }
+
+    [Fact]
+    public void KesslerRidgeBoosterStation()
+    {
+        var a = Example("booster-station.motors");
+        Assert.Empty(a.Findings.Where(f => f.Severity != Parser.Diagnostics.Severity.Information));
+
+        // P-1, 60 hp 480 V design B premium: 77 A (Table 430.250). 430.22: 96.25 A -> 3 AWG Cu 75 C (100 A).
+        // Inverse-time 250 % = 192.5 -> 200 A. Overload 125 % x 70 = 87.5 A. Ground for the 175 A breaker: 200 A row -> 6 AWG.
+        var p1 = Row(a, "P-1");
+        Assert.Equal(("77 A", "3 AWG", "200 A ITB", "87.5 A", "6 AWG"), (p1.Flc, p1.MinimumWire, p1.MaximumProtection, p1.OverloadLimit, p1.MinimumGround));
+
+        // VP-1, 1 hp short-time duty, 5-min rated: 430.22(E) 110 % x 1.9 A = 2.09 A; dual-element 175 % x 2.1 = 3.68 -> 6 A (a standard fuse rating).
+        var vp = Row(a, "VP-1");
+        Assert.Equal(("2.1 A", "6 A DE fuse", ""), (vp.Flc, vp.MaximumProtection, vp.Overload));
+
+        // SWBD-1 carries MCC-1 ('from'): 1.25 x 77 + 77 + 2.1 + 1.25 x 15 kVA / (1.732 x 480) = 197.89 A -> 3/0 AWG (200 A at 75 C).
+        var swbd = Schedule.Of(a).Feeders.Single(f => f.Tag == "SWBD-1");
+        Assert.Equal(("197.89 A", "3/0 AWG", "300 A"), (swbd.RequiredAmpacity, swbd.MinimumWire, swbd.MaximumProtection));
+    }
+
+    [Fact]
+    public void CabinetShopReportsEachPlantedMistake()
+    {
+        var a = Example("cabinet-shop.motors");
+        var codes = a.Findings.Where(f => f.Severity != Parser.Diagnostics.Severity.Information)
+            .Select(f => $"{f.Range.Start.Line + 1} {f.Code}").ToList();
+        // Line 11: feeder wire 2 AWG (95 A at 60 C) for 430.24's 1.25 x 50 + 16.7 + 24.2 + 10.6 = 114 A.
+        // Line 12: 125 A feeder breaker needs 6 AWG (Table 250.122, 200 A row).
+        // Line 18: SAW-1 14 AWG (15 A at 60 C) for 1.25 x 16.7 = 20.88 A.  Line 19: 60 A breaker over 250 % x 16.7 = 41.75 -> 45 A.
+        // Line 25: DC-1 10 AWG (30 A at 60 C) for 1.25 x 24.2 = 30.25 A.   Line 27: overload 27.5 A over 115 % x 22 = 25.3 A.
+        // Line 29: CMP-1 has no overload, and is a 230 V motor on 208 V.   Line 31: 6 AWG (55 A) for 1.25 x 50 = 62.5 A.
+        // Line 34: PL-1 has no overload.  Line 37: 40 A breaker over 250 % x 10.6 = 26.5 -> 30 A.
+        Assert.Equal(
+            ["11 M107", "12 M106", "18 M101", "19 M102", "25 M101", "27 M205", "29 M203", "29 M110", "31 M101", "34 M203", "37 M102"],
+            codes);
+        Assert.All(a.Findings.Where(f => f.Code is FindingCodes.WireUndersized or FindingCodes.ProtectionTooLarge or FindingCodes.FeederWireUndersized),
+            f => Assert.NotNull(f.Fix));
+    }
+}
