@@ -1,0 +1,115 @@
+using System.Text.Json;
+using System.Text.Json.Nodes;
+using Json.Schema;
+
+namespace MotorLang.Cli.Tests;
+
+/// <summary>The real executable: exit codes, every output format, atomic writes, and diff between git revisions.</summary>
+public sealed class ExecutableTests : IDisposable
+{
+    private readonly string _dir = Directory.CreateTempSubdirectory("motorlang-exe-").FullName;
+
+    public void Dispose() => Directory.Delete(_dir, recursive: true);
+
+    private static string Example(string name) => Path.Combine(Executable.RepoRoot, "examples", name);
+
+    private static void AssertValid(string schemaPath, string json)
+    {
+        var schema = JsonSchema.FromText(File.ReadAllText(schemaPath));
+        using var doc = JsonDocument.Parse(json);
+        var result = schema.Evaluate(doc.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.List, RequireFormatValidation = true });
+        Assert.True(result.IsValid, string.Join("\n", (result.Details ?? []).Where(d => d.Errors is not null)
+            .SelectMany(d => d.Errors!.Select(e => $"{d.InstanceLocation}: {e.Value}"))));
+    }
+
+    [Fact]
+    public void ExitCodesAreZeroOneAndTwo()
+    {
+        Assert.Equal(0, Executable.Run(_dir, "check", Example("dairy-bottling.motors")).Code);
+        Assert.Equal(1, Executable.Run(_dir, "check", Example("cabinet-shop.motors")).Code);
+        var missing = Executable.Run(_dir, "check", "nowhere.motors");
+        Assert.Equal(2, missing.Code);
+        Assert.DoesNotContain("Exception", missing.Err);
+        Assert.Equal(2, Executable.Run(_dir, "check", "--format", "xml", Example("dairy-bottling.motors")).Code);
+    }
+
+    [Fact]
+    public void JsonOutputMatchesItsSchema()
+    {
+        var (code, json, _) = Executable.Run(_dir, "check", "--format", "json", Example("cabinet-shop.motors"), Example("dairy-bottling.motors"));
+        Assert.Equal(1, code);
+        AssertValid(Path.Combine(Executable.RepoRoot, "docs", "schemas", "check-report.schema.json"), json);
+        var report = JsonNode.Parse(json)!;
+        Assert.Equal(7, (int)report["summary"]!["errors"]!);
+        Assert.Equal("M107", (string)report["files"]![0]!["findings"]![0]!["code"]!);
+    }
+
+    [Fact]
+    public void SarifOutputHasThe210Shape()
+    {
+        var (_, sarif, _) = Executable.Run(_dir, "check", "--format", "sarif", Example("cabinet-shop.motors"));
+        AssertValid(Path.Combine(AppContext.BaseDirectory, "Schemas", "sarif-2.1.0-subset.schema.json"), sarif);
+        var run = JsonNode.Parse(sarif)!["runs"]![0]!;
+        var first = run["results"]![0]!;
+        Assert.Equal("error", (string)first["level"]!);
+        Assert.Equal(11, (int)first["locations"]![0]!["physicalLocation"]!["region"]!["startLine"]!);
+        Assert.Contains(run["tool"]!["driver"]!["rules"]!.AsArray(), r => (string)r!["id"]! == (string)first["ruleId"]!);
+    }
+
+    [Theory]
+    [InlineData("csv", "Feeder,Tag,Description,Power")]
+    [InlineData("markdown", "| Feeder | Tag | Description |")]
+    [InlineData("table", "Max protection")]
+    [InlineData("json", "\"Rows\"")]
+    public void ScheduleFormats(string format, string expected)
+    {
+        var (code, output, _) = Executable.Run(_dir, "schedule", "--format", format, Example("dairy-bottling.motors"));
+        Assert.Equal(0, code);
+        Assert.Contains(expected, output);
+        Assert.Contains("P-101", output);
+    }
+
+    [Fact]
+    public void SizeWritesAtomicallyAndDryRunPrintsADiff()
+    {
+        var path = Path.Combine(_dir, "shop.motors");
+        File.Copy(Example("cabinet-shop.motors"), path);
+        var before = File.ReadAllText(path);
+        var dry = Executable.Run(_dir, "size", "--dry-run", path);
+        Assert.Equal(0, dry.Code);
+        Assert.Contains("-    wire 14 AWG", dry.Out);
+        Assert.Contains("+    wire 10 AWG", dry.Out);
+        Assert.Equal(before, File.ReadAllText(path));
+
+        Assert.Equal(0, Executable.Run(_dir, "size", path).Code);
+        Assert.Empty(Directory.GetFiles(_dir, "*.tmp"));
+        var check = Executable.Run(_dir, "check", path);
+        Assert.DoesNotContain("M101", check.Out);
+        Assert.DoesNotContain("M102", check.Out);
+        Assert.Contains("# too small for 16.7 A FLC at 125 %", File.ReadAllText(path)); // comments survive
+    }
+
+    [Fact]
+    public void DiffComparesTwoGitRevisionsByTag()
+    {
+        Executable.Git(_dir, "init", "-q");
+        var path = Path.Combine(_dir, "plant.motors");
+        File.WriteAllText(path, "feeder MCC 480V 3ph\n  motor P-301 \"Pump\" 15hp\n    design B\n    wire 10 AWG\n  motor P-302 5hp\n");
+        Executable.Git(_dir, "add", "plant.motors");
+        Executable.Git(_dir, "commit", "-q", "-m", "first");
+        File.WriteAllText(path, "feeder MCC 480V 3ph\n  motor P-301 \"Pump\" 30hp\n    design B\n    wire 10 AWG\n  motor P-303 5hp\n");
+        Executable.Git(_dir, "commit", "-q", "-am", "second");
+
+        var (code, output, err) = Executable.Run(_dir, "diff", "HEAD~1:plant.motors", "HEAD:plant.motors");
+        Assert.True(code == 0, err);
+        var lines = output.Trim().Split('\n');
+        // 30 hp 480 V: 40 A (Table 430.250) x 125 % = 50 A -> 8 AWG at 75 C (design B); 15 hp: 21 A -> 26.25 A -> 10 AWG.
+        Assert.Contains(lines, l => l.StartsWith("~ motor P-301: power 15hp → 30hp") && l.Contains("minimum wire 10 AWG → 8 AWG") && l.Contains("now: M101"));
+        Assert.Contains(lines, l => l.StartsWith("+ motor P-303 added"));
+        Assert.Contains("- motor P-302 removed", lines);
+
+        var bad = Executable.Run(_dir, "diff", "HEAD~9:plant.motors", "HEAD:plant.motors");
+        Assert.Equal(2, bad.Code);
+        Assert.Contains("git cannot show", bad.Err);
+    }
+}
