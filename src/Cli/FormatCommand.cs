@@ -10,7 +10,8 @@ public static class FormatCommand
     {
         var paths = new Argument<string[]>("paths") { Description = "Motor-list files or folders", Arity = ArgumentArity.OneOrMore };
         var check = new Option<bool>("--check") { Description = "Change nothing; exit 1 and name each file that would change" };
-        var command = new Command("fmt", "Format motor lists in place") { paths, check };
+        var toStdout = new Option<bool>("--stdout") { Description = "Print the formatted text instead of writing the file (for git textconv)" };
+        var command = new Command("fmt", "Format motor lists in place") { paths, check, toStdout };
         command.SetAction(result =>
         {
             var checkOnly = result.GetValue(check);
@@ -22,6 +23,12 @@ public static class FormatCommand
                 if (!formatted.Verified)
                 {
                     stderr.WriteLine($"{file}: not formatted: the formatted text did not read back the same (please report this)");
+                    continue;
+                }
+
+                if (result.GetValue(toStdout))
+                {
+                    stdout.Write(formatted.Text.TrimStart('\uFEFF'));
                     continue;
                 }
 
