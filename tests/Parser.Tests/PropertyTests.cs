@@ -132,6 +132,7 @@ public class PropertyTests
             Assert.Equal(once.Text, Text.TextEdits.Apply(text, once.Edits));
             var reparsed = DocumentParser.Parse(once.Text);
             Assert.Equal(Comments(parsed), Comments(reparsed));
+            Assert.True(Fingerprint.Same(parsed, reparsed));
             Assert.True(Fingerprint.Same(Fingerprint.Of(parsed), Fingerprint.Of(reparsed)));
             Assert.Equal(once.Text, Formatter.Format(once.Text).Text);
         }, iter: 1000);

@@ -14,9 +14,9 @@ public sealed record FormatResult(string Text, IReadOnlyList<TextEdit> Edits, bo
 /// <summary>
 /// Writes each well-formed line in its canonical form: two spaces per block level, one space
 /// between values, units and keywords spelled one way, an end-of-line comment kept in its column
-/// (or two spaces after the code when the code has grown past it),
-/// at most one blank line in a row. Lines with errors, and lines under them, are left exactly as
-/// they are. Lines are never reordered and comments are never touched.
+/// (or two spaces after the code when the code has grown past it), at most one blank line in a
+/// row. Lines with errors, and lines under them, are left exactly as they are. Lines are never
+/// reordered and comments are never touched.
 /// </summary>
 public static class Formatter
 {
@@ -28,7 +28,9 @@ public static class Formatter
     public static FormatResult Format(ParseResult parsed, int firstLine = 0, int lastLine = int.MaxValue)
     {
         var result = FormatOnce(parsed, firstLine, lastLine);
-        if (!result.Changed || firstLine > 0 || lastLine < int.MaxValue) return result;
+        var wholeDocument = firstLine == 0 && lastLine == int.MaxValue;
+        if (!result.Changed || !wholeDocument || !parsed.Diagnostics.Any(d => d.Code == Diagnostics.SyntaxCodes.BadIndentation))
+            return result;
 
         // Re-indenting one line can mend another line's indentation error, which the next pass then
         // formats. A few passes reach the fixed point, so formatting twice changes nothing.
@@ -41,86 +43,104 @@ public static class Formatter
         }
 
         if (text == result.Text) return result;
-        if (!Fingerprint.Same(Fingerprint.Of(DocumentParser.Parse(text)), Fingerprint.Of(parsed))) return result;
+        if (!Fingerprint.Same(DocumentParser.Parse(text), parsed)) return result;
         return new FormatResult(text, [WholeDocument(parsed.Tree, text)], true);
     }
 
-    private static TextEdit WholeDocument(SyntaxTree tree, string text)
+    /// <summary>The statement as the formatter writes it, without indentation or comment.</summary>
+    public static string Canonical(Statement statement) => AppendCanonical(new StringBuilder(), statement).ToString();
+
+    /// <summary>Appends keyword and arguments in source order, each in its canonical spelling.</summary>
+    public static StringBuilder AppendCanonical(StringBuilder sb, Statement statement)
     {
-        var last = tree.Lines[^1];
-        var end = new TextPosition(last.Index, last.Length);
-        return new TextEdit(new SourceRange(new TextPosition(0, 0), end), tree.HasBom ? text[1..] : text);
+        sb.Append(statement.Keyword);
+        var args = statement.Args;
+        var sorted = true;
+        for (var i = 1; i < args.Length && sorted; i++) sorted = args[i - 1].Range.Start.CompareTo(args[i].Range.Start) < 0;
+        foreach (var arg in sorted ? args.AsEnumerable() : args.OrderBy(a => a.Range.Start)) sb.Append(' ').Append(arg.Canonical);
+        return sb;
     }
 
     private static FormatResult FormatOnce(ParseResult parsed, int firstLine, int lastLine)
     {
         var tree = parsed.Tree;
         var lines = tree.Lines;
-        var output = new string?[lines.Length];
+        // Per line: null keeps the line as it is; "" with Delete removes it; anything else replaces its content.
+        var replacement = new string?[lines.Length];
+        var delete = new bool[lines.Length];
         var lastContent = LastNonBlank(lines);
         var previousBlank = true; // so blank lines at the start of the file go
+        var sb = new StringBuilder(128);
         for (var i = 0; i < lines.Length; i++)
         {
             var line = lines[i];
-            var original = line.Content + line.LineEnding;
-            var inRange = i >= firstLine && i <= lastLine;
             var blank = line.Kind == LineKind.Blank && !line.InConflict;
-            if (!inRange)
+            if (i < firstLine || i > lastLine)
             {
-                output[i] = original;
                 previousBlank = blank;
                 continue;
             }
 
             if (blank)
             {
-                var drop = previousBlank || i > lastContent;
-                output[i] = drop ? null : line.LineEnding;
                 // The empty pseudo-line after a final newline stays, or the file would lose it.
-                if (i == lines.Length - 1 && line.LineEnding.Length == 0) output[i] = "";
+                var eof = i == lines.Length - 1 && line.LineEnding.Length == 0;
+                if (!eof && (previousBlank || i > lastContent)) delete[i] = true;
+                else if (line.Length > 0) replacement[i] = "";
                 previousBlank = true;
                 continue;
             }
 
             previousBlank = false;
-            output[i] = line.IsBroken || line.InConflict ? original : FormatLine(line, lines, i) + line.LineEnding;
+            if (line.IsBroken || line.InConflict) continue;
+            sb.Clear();
+            AppendLine(sb, line, lines, i);
+            if (!sb.Equals(line.ContentSpan)) replacement[i] = sb.ToString();
         }
 
-        var sb = new StringBuilder(tree.Text.Length);
-        if (tree.HasBom) sb.Append('\uFEFF');
-        foreach (var o in output) sb.Append(o);
-        var formatted = sb.ToString();
-        var edits = Edits(lines, output);
+        var edits = Edits(lines, replacement, delete);
         if (edits.Count == 0) return new FormatResult(tree.Text, edits, true);
 
+        var output = new StringBuilder(tree.Text.Length);
+        if (tree.HasBom) output.Append('\uFEFF');
+        for (var i = 0; i < lines.Length; i++)
+        {
+            if (delete[i]) continue;
+            if (replacement[i] is { } r) output.Append(r);
+            else output.Append(lines[i].ContentSpan);
+            output.Append(lines[i].LineEnding);
+        }
+
+        var formatted = output.ToString();
         // Re-read what we wrote: if it does not describe the same document, give nothing back.
-        var verified = Fingerprint.Same(Fingerprint.Of(DocumentParser.Parse(formatted)), Fingerprint.Of(parsed));
-        return verified ? new FormatResult(formatted, edits, true) : new FormatResult(tree.Text, [], false);
+        return Fingerprint.Same(DocumentParser.Parse(formatted), parsed)
+            ? new FormatResult(formatted, edits, true)
+            : new FormatResult(tree.Text, [], false);
     }
 
-    private static string FormatLine(SyntaxLine line, IReadOnlyList<SyntaxLine> lines, int index)
+    private static void AppendLine(StringBuilder sb, SyntaxLine line, IReadOnlyList<SyntaxLine> lines, int index)
     {
         if (line.Statement is not { } statement)
         {
             // A comment-only line takes the indentation of the statement it introduces.
             var depth = NextDepth(lines, index);
-            var indent = depth >= 0 ? Repeat(depth) : line.Content[..line.IndentWidth];
-            return indent + line.Comment!.Value.Text;
+            if (depth >= 0) AppendIndent(sb, depth);
+            else sb.Append(line.ContentSpan[..line.IndentWidth]);
+            sb.Append(line.Comment!.Value.Text);
+            return;
         }
 
-        var code = Repeat(line.Depth) + Canonical(statement);
-        if (line.Comment is not { } comment) return code;
+        AppendIndent(sb, line.Depth);
+        AppendCanonical(sb, statement);
+        if (line.Comment is not { } comment) return;
         // Comments aligned in a column stay in that column while the code fits before it.
-        var column = code.Length + 2 <= comment.Column ? comment.Column : code.Length + 2;
-        return code.PadRight(column) + comment.Text;
+        var column = sb.Length + 2 <= comment.Column ? comment.Column : sb.Length + 2;
+        sb.Append(' ', column - sb.Length).Append(comment.Text);
     }
 
-    /// <summary>The statement as the formatter writes it, without indentation or comment.</summary>
-    public static string Canonical(Statement statement)
+    private static void AppendIndent(StringBuilder sb, int depth)
     {
-        var sb = new StringBuilder(statement.Keyword);
-        foreach (var arg in statement.Args.OrderBy(a => a.Range.Start)) sb.Append(' ').Append(arg.Canonical);
-        return sb.ToString();
+        for (var d = 0; d < depth; d++) sb.Append(IndentUnit);
     }
 
     private static int NextDepth(IReadOnlyList<SyntaxLine> lines, int index)
@@ -145,21 +165,25 @@ public static class Formatter
         return -1;
     }
 
-    private static string Repeat(int depth) => depth <= 0 ? "" : string.Concat(Enumerable.Repeat(IndentUnit, depth));
-
     /// <summary>One edit per changed or removed line, each replacing the whole line including its ending.</summary>
-    private static List<TextEdit> Edits(IReadOnlyList<SyntaxLine> lines, string?[] output)
+    private static List<TextEdit> Edits(IReadOnlyList<SyntaxLine> lines, string?[] replacement, bool[] delete)
     {
         var edits = new List<TextEdit>();
         for (var i = 0; i < lines.Count; i++)
         {
-            var original = lines[i].Content + lines[i].LineEnding;
-            var now = output[i] ?? "";
-            if (now == original) continue;
-            var end = lines[i].LineEnding.Length > 0 ? new TextPosition(i + 1, 0) : new TextPosition(i, lines[i].Content.Length);
-            edits.Add(new TextEdit(new SourceRange(new TextPosition(i, 0), end), now));
+            if (!delete[i] && replacement[i] is null) continue;
+            var line = lines[i];
+            var end = line.LineEnding.Length > 0 ? new TextPosition(i + 1, 0) : new TextPosition(i, line.Length);
+            edits.Add(new TextEdit(new SourceRange(new TextPosition(i, 0), end), delete[i] ? "" : replacement[i] + line.LineEnding));
         }
 
         return edits;
+    }
+
+    private static TextEdit WholeDocument(SyntaxTree tree, string text)
+    {
+        var last = tree.Lines[^1];
+        var end = new TextPosition(last.Index, last.Length);
+        return new TextEdit(new SourceRange(new TextPosition(0, 0), end), tree.HasBom ? text[1..] : text);
     }
 }
