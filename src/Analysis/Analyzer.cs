@@ -46,7 +46,8 @@ public static class Analyzer
         var findings = parse.Diagnostics.Select(Finding.From).ToList();
         var edits = new EditBuilder(parse.Tree);
         var model = parse.Model;
-        var motorSizer = new MotorSizer(edits, findings);
+        var cache = new SizingCache();
+        var motorSizer = new MotorSizer(edits, findings, cache);
         var motors = new Dictionary<MotorNode, MotorResult>();
         foreach (var motor in model.Motors.Where(m => !m.Header.Line.IsBroken || m.Power is not null))
         {
@@ -54,7 +55,7 @@ public static class Analyzer
         }
 
         ShareInheritedFixes(motorSizer.Inherited, findings);
-        var feederSizer = new FeederSizer(model, motors, edits, findings);
+        var feederSizer = new FeederSizer(model, motors, edits, findings, cache);
         var feeders = new Dictionary<FeederNode, FeederResult>();
         foreach (var feeder in model.Feeders)
         {

@@ -19,6 +19,7 @@ public static class Likes
     /// <summary>The first value found along the chain, with the motor it was written on.</summary>
     public static (Located<T> Value, MotorNode Owner)? Get<T>(MotorNode motor, Func<MotorNode, Located<T>?> get)
     {
+        if (motor.Like is null) return get(motor) is { } own ? (own, motor) : null;
         foreach (var m in Chain(motor))
         {
             if (get(m) is { } v) return (v, m);

@@ -26,6 +26,11 @@ public sealed record Settings(
 
     public InstallationConditions Conditions => new(Material, InsulationRating, TerminationRating, AmbientCelsius, CurrentCarrying, Raceway, Insulation);
 
+    private static readonly string[] SettingKeywords = ["ambient", "conductor", "raceway", "ccc", "drop-limit", "power-factor", "code"];
+
+    /// <summary>True when the block writes any installation setting of its own.</summary>
+    public static bool HasOwn(BlockNode block) => SettingKeywords.Any(block.Has);
+
     public static Settings For(BlockNode block)
     {
         var chain = new List<BlockNode>();

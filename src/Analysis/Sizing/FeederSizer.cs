@@ -14,7 +14,7 @@ namespace MotorLang.Analysis.Sizing;
 /// Sizes feeders (430.24, 430.62(A)) from the motors and loads they supply, including those on
 /// feeders supplied from them ('from'), so a switchboard feeder carries its motor control centers.
 /// </summary>
-internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode, MotorResult> motors, EditBuilder edits, List<Finding> findings)
+internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode, MotorResult> motors, EditBuilder edits, List<Finding> findings, SizingCache cache)
 {
     private static readonly decimal Sqrt3 = 1.7320508075688772935274463415m;
 
@@ -42,7 +42,7 @@ internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode
         r.MaximumProtection = Feeders.MaximumProtection(feederMotors, loads, fuse: device is ProtectiveDevice.DualElementFuse or ProtectiveDevice.NonTimeDelayFuse);
         r.ProtectionRating = feeder.ProtectionRating?.Value.Value;
         var required = r.RequiredAmpacity.Value!.Value;
-        if (required > 0) r.MinimumWire = Ampacity.Minimum(required, settings.Conditions);
+        if (required > 0) r.MinimumWire = cache.MinimumWire(required, settings.Conditions, false);
 
         CheckWire(feeder, r, required, settings);
         CheckProtection(feeder, r);
@@ -87,7 +87,7 @@ internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode
         }
 
         r.Wire = wire.Value;
-        r.WireAmpacity = Ampacity.Allowable(wire.Value, settings.Conditions);
+        r.WireAmpacity = cache.Allowable(wire.Value, settings.Conditions, false);
         if (r.WireAmpacity.Value is { } allowable && allowable < required && r.MinimumWire?.Value is { } minimum)
             Add(FindingCodes.FeederWireUndersized, Severity.Error, wire.Range,
                 $"feeder wire {wire.Value} carries {Format.Amps(allowable)} here; NEC 430.24 requires {Format.Amps(required)}: use {minimum}",
@@ -126,7 +126,7 @@ internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode
         // 250.122(B) measures upsizing from the smallest conductor that suits the installation; a feeder's
         // conductors are normally chosen to carry its protective device's rating, so that is the base
         // (common practice, no source). Anything larger counts as upsized.
-        var baseline = Ampacity.Minimum(Math.Max(r.RequiredAmpacity?.Value ?? 0, device), settings.Conditions).Value;
+        var baseline = cache.MinimumWire(Math.Max(r.RequiredAmpacity?.Value ?? 0, device), settings.Conditions, false).Value;
         r.MinimumGround = Grounding.Minimum(device, settings.Material, r.Wire ?? r.MinimumWire?.Value, baseline, "NEC 250.122(A)");
         if (r.MinimumGround.Value is not { } min) return;
         if (feeder.Ground is not { } ground)

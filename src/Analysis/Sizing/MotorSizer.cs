@@ -14,10 +14,18 @@ using MotorLang.Sizing.Tables;
 namespace MotorLang.Analysis.Sizing;
 
 /// <summary>Sizes one motor circuit with the sizing core and reports what the motor list gets wrong or leaves out.</summary>
-internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
+internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, SizingCache cache)
 {
     /// <summary>Findings about values a motor inherits through 'like', with the motor they are written on.</summary>
     public List<(Finding Finding, MotorNode Owner)> Inherited { get; } = [];
+
+    private readonly Dictionary<FeederNode, Settings> _feederSettings = [];
+
+    private Settings FeederSettings(FeederNode feeder)
+    {
+        if (!_feederSettings.TryGetValue(feeder, out var s)) _feederSettings[feeder] = s = Settings.For(feeder);
+        return s;
+    }
 
     public MotorResult Size(MotorNode motor)
     {
@@ -25,7 +33,7 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
         var feeder = motor.Feeder;
         if (motor.Power is not { } power || feeder.Voltage is not { } systemVolts || feeder.Phases is not { } systemPhases) return r;
 
-        var settings = Settings.For(motor);
+        var settings = motor.Like is null && !Settings.HasOwn(motor) ? FeederSettings(feeder) : Settings.For(motor);
         var ratedVolts = motor.RatedVoltage?.Value.Value ?? systemVolts.Value.Value;
         var phases = motor.Phases?.Value ?? systemPhases.Value;
         r.Volts = systemVolts.Value.Value;
@@ -42,7 +50,7 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
         r.Horsepower = power.Value.Unit == Unit.Kw
             ? MotorCurrent.Lookup(rating)?.Horsepower ?? power.Value.Value / MotorCurrent.KilowattsPerHorsepower
             : power.Value.Value;
-        r.FullLoadCurrent = MotorCurrent.DesignCurrent(rating);
+        r.FullLoadCurrent = cache.DesignCurrent(rating);
         if (r.FullLoadCurrent.Value is not { } flc)
         {
             Add(FindingCodes.NeedsNameplate, Severity.Error, power.Range,
@@ -56,11 +64,11 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
         var dutyRating = DutyRatingOf(Get(motor, m => m.DutyRating)?.Value);
         var starting = Get(motor, m => m.Starting)?.Value ?? StartingMethod.FullVoltage;
         var driveInput = Get(motor, m => m.DriveInputCurrent)?.Value.Value;
-        r.RequiredAmpacity = BranchConductors.RequiredAmpacity(new BranchInput(flc, nameplate, duty, dutyRating, starting, driveInput));
+        r.RequiredAmpacity = cache.RequiredAmpacity(new BranchInput(flc, nameplate, duty, dutyRating, starting, driveInput));
         if (duty != DutyKind.Continuous) r.DutyCycleAmps = r.RequiredAmpacity.Value;
         if (r.RequiredAmpacity.Value is { } required)
         {
-            r.MinimumWire = Ampacity.Minimum(required, conditions, designBcd);
+            r.MinimumWire = cache.MinimumWire(required, conditions, designBcd);
             CheckWire(motor, r, required, conditions, designBcd);
         }
         else
@@ -128,7 +136,7 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
         }
 
         r.Wire = wire.Value;
-        r.WireAmpacity = Ampacity.Allowable(wire.Value, conditions, designBcd);
+        r.WireAmpacity = cache.Allowable(wire.Value, conditions, designBcd);
         if (r.WireAmpacity.Value is { } allowable && allowable < required && r.MinimumWire?.Value is { } minimum)
         {
             Add(FindingCodes.WireUndersized, Severity.Error, RangeOn(motor, owner, wire.Range),
@@ -144,7 +152,7 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
         r.Device = device?.Value ?? ProtectiveDevice.InverseTimeBreaker;
         r.ProtectionRating = rating?.Value.Value;
         var hardStart = Likes.Has(motor, m => m.HardStart);
-        r.MaximumProtection = ShortCircuitProtection.Maximum(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency, hardStart));
+        r.MaximumProtection = cache.MaximumProtection(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency, hardStart));
         if (r.MaximumProtection.Value is not { } max) return;
         var deviceName = ShortCircuitProtection.DeviceName(r.Device);
         var unit = r.Device == ProtectiveDevice.InstantaneousTripBreaker ? "setting" : "rating";
@@ -191,8 +199,8 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
         // A temperature rise converts from °F by 5/9 alone: it is a difference, not a temperature.
         var riseQuantity = Get(motor, m => m.TemperatureRise)?.Value;
         decimal? rise = riseQuantity is { } q ? (q.Unit == Unit.Fahrenheit ? q.Value * 5m / 9m : q.Value) : null;
-        r.OverloadLimit = Overloads.Maximum(nameplate, sf, rise);
-        r.OverloadAbsoluteLimit = Overloads.AbsoluteMaximum(nameplate, sf, rise);
+        r.OverloadLimit = cache.Overload(nameplate, sf, rise, absolute: false);
+        r.OverloadAbsoluteLimit = cache.Overload(nameplate, sf, rise, absolute: true);
         var overload = Get(motor, m => m.Overload, out var owner);
         r.Overload = overload?.Value.Value;
         if (overload is null)
@@ -228,9 +236,9 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
 
     private void CheckDisconnectAndController(MotorNode motor, MotorResult r, decimal flc)
     {
-        r.Disconnect = Disconnects.ForMotor(flc, r.Horsepower);
+        r.Disconnect = cache.Disconnect(flc, r.Horsepower);
         r.Controller = Controllers.MinimumHorsepower(r.Horsepower);
-        r.NemaStarter = Controllers.NemaSize(r.Horsepower, r.Volts, out var size);
+        (r.NemaStarter, var size) = cache.Nema(r.Horsepower, r.Volts);
         r.NemaStarterSize = r.NemaStarter.HasValue ? size : null;
         var need = r.Disconnect.Value!.Value;
         if (Get(motor, m => m.DisconnectRating, out var ampsOwner) is { } amps && amps.Value.Value < need.MinimumAmps)
@@ -251,9 +259,9 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
         var material = settings.Material;
         var phaseMinimum = r.MinimumWire?.Value;
         if (r.Device == ProtectiveDevice.InstantaneousTripBreaker)
-            r.MinimumGround = Grounding.ForInstantaneousTrip(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency), material, r.Wire ?? phaseMinimum, phaseMinimum);
+            r.MinimumGround = cache.GroundForInstantaneousTrip(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency), material, r.Wire ?? phaseMinimum, phaseMinimum);
         else if ((r.ProtectionRating ?? r.MaximumProtection?.Value) is { } device)
-            r.MinimumGround = Grounding.Minimum(device, material, r.Wire ?? phaseMinimum, phaseMinimum);
+            r.MinimumGround = cache.Ground(device, material, r.Wire ?? phaseMinimum, phaseMinimum, "NEC 250.122(D)(1)");
         if (r.MinimumGround?.Value is not { } min) return;
 
         var ground = Get(motor, m => m.Ground, out var owner);
@@ -288,7 +296,7 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings)
         if (wire is null) return;
         var ground = r.Ground ?? r.MinimumGround?.Value;
         var contents = new RacewayContents(phases == Phases.Three ? 3 : 2, wire.Value.Size, ground);
-        r.MinimumConduit = ConduitFill.SmallestTradeSize(contents, settings.Raceway, settings.Insulation);
+        r.MinimumConduit = cache.SmallestConduit(contents, settings.Raceway, settings.Insulation);
         if (Get(motor, m => m.Conduit, out var owner) is not { } conduit) return;
         var trade = Numbers.Horsepower(conduit.Value.Value);
         r.ConduitFillPercent = ConduitFill.FillPercent(contents, settings.Raceway, trade);
