@@ -14,8 +14,11 @@ namespace MotorLang.Parser.Statements;
 /// </summary>
 internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagnostics)
 {
+    // Reused for every line: a document has one parser and reads one line at a time.
+    private readonly List<Item> _items = [];
+
     /// <summary>A value made of one token or of a number and its unit written apart ("15 hp", "10 AWG").</summary>
-    private sealed record Item(SyntaxToken First, SyntaxToken Last, LexicalValue Value)
+    private readonly record struct Item(SyntaxToken First, SyntaxToken Last, LexicalValue Value)
     {
         public SourceRange Range => SourceRange.Cover(First.Range, Last.Range);
 
@@ -79,7 +82,15 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         }
 
         ok = diagnostics.Count == before;
-        return new Statement(line, spec, filled.OfType<Argument>().ToImmutableArray());
+        var count = 0;
+        foreach (var a in filled) count += a is null ? 0 : 1;
+        var args = ImmutableArray.CreateBuilder<Argument>(count);
+        foreach (var a in filled)
+        {
+            if (a is not null) args.Add(a);
+        }
+
+        return new Statement(line, spec, args.MoveToImmutable());
     }
 
     private int Place(KeywordSpec spec, Argument?[] filled, Item item)
@@ -166,7 +177,7 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
 
     private Argument? ToArgument(ArgSpec arg, LexicalValue.Number n, decimal value, Item item)
     {
-        var canonical = n.Digits + Units.Canonical(n.Unit);
+        var canonical = reader.Canonical(n);
         switch (arg.Kind)
         {
             case ArgKind.Integer:
@@ -231,7 +242,7 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         }
 
         var wire = new WireSpec(sets, s);
-        filled[slot] = new Argument(spec.Args[slot], wire, item.Range, wire.ToString());
+        filled[slot] = new Argument(spec.Args[slot], wire, item.Range, reader.Canonical(wire));
         return slot;
     }
 
@@ -258,7 +269,8 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
 
     private List<Item> Group(ImmutableArray<SyntaxToken> tokens)
     {
-        var items = new List<Item>(tokens.Length);
+        var items = _items;
+        items.Clear();
         for (var i = 1; i < tokens.Length; i++)
         {
             var t = tokens[i];

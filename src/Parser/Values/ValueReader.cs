@@ -4,6 +4,22 @@ namespace MotorLang.Parser.Values;
 internal sealed class ValueReader
 {
     private readonly Dictionary<string, LexicalValue> _seen = new(StringComparer.Ordinal);
+    private readonly Dictionary<(string, Unit), string> _canonical = [];
+    private readonly Dictionary<Sizing.Domain.WireSpec, string> _wires = [];
+
+    /// <summary>How the formatter writes a number with its unit; one string per distinct value.</summary>
+    public string Canonical(LexicalValue.Number n)
+    {
+        if (!_canonical.TryGetValue((n.Digits, n.Unit), out var text))
+            _canonical[(n.Digits, n.Unit)] = text = n.Digits + Units.Canonical(n.Unit);
+        return text;
+    }
+
+    public string Canonical(Sizing.Domain.WireSpec wire)
+    {
+        if (!_wires.TryGetValue(wire, out var text)) _wires[wire] = text = wire.ToString();
+        return text;
+    }
 
     public LexicalValue Read(string token)
     {
