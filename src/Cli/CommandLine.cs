@@ -13,6 +13,7 @@ public static class CommandLine
         root.Subcommands.Add(ScheduleCommand.Create(stdout));
         root.Subcommands.Add(SizeCommand.Create(stdout, stderr));
         root.Subcommands.Add(DiffCommand.Create(stdout));
+        root.Subcommands.Add(LspCommand.Create());
 
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)

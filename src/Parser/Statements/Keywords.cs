@@ -171,6 +171,9 @@ public static class Keywords
     private static readonly Dictionary<string, KeywordSpec> ByName =
         All.ToDictionary(k => k.Keyword, StringComparer.OrdinalIgnoreCase);
 
+    /// <summary>Tags are letters, digits, '-', '_', '.' and '/', starting with a letter or digit.</summary>
+    public static bool IsValidTag(string text) => StatementParser.IsValidTag(text);
+
     public static KeywordSpec? Find(string keyword) => ByName.GetValueOrDefault(keyword);
 
     public static IEnumerable<KeywordSpec> AllowedIn(BlockKind block) => All.Where(k => k.AllowedIn.Contains(block));

@@ -1,0 +1,137 @@
+using MotorLang.Analysis.Sizing;
+using MotorLang.Parser.Model;
+using MotorLang.Parser.Text;
+using MotorLang.Sizing;
+using MotorLang.Sizing.Rules;
+using MotorLang.Sizing.Tables;
+
+namespace MotorLang.Analysis.Editing;
+
+/// <summary>One part of a hover: a heading, the calculation steps, and how the written value compares.</summary>
+public sealed record BreakdownSection(string Heading, IReadOnlyList<Step> Steps, string? Verdict = null);
+
+/// <summary>What to show for a position: a title and the sections that explain it.</summary>
+public sealed record BreakdownView(string Title, IReadOnlyList<BreakdownSection> Sections, SourceRange Range);
+
+/// <summary>
+/// The calculation behind whatever is under the cursor: a motor's whole sizing on its header, one
+/// quantity on its own line (wire, protection, overload...), a feeder's totals on the feeder.
+/// </summary>
+public static class Breakdown
+{
+    public static BreakdownView? At(AnalysisResult analysis, TextPosition position)
+    {
+        var lines = analysis.Parse.Tree.Lines;
+        if (position.Line >= lines.Length) return null;
+        var line = lines[position.Line];
+        var range = line.Statement?.Range ?? SourceRange.OnLine(position.Line, 0, line.Length);
+        var keyword = line.Statement?.Keyword;
+
+        var motor = analysis.Motors.Values.FirstOrDefault(m => position.Line >= m.Motor.Header.Line.Index && position.Line <= m.Motor.LastLine);
+        if (motor is not null)
+        {
+            var sections = keyword == "motor" ? MotorSections(motor).ToList() : MotorSections(motor).Where(s => Belongs(s.Heading, keyword)).ToList();
+            if (sections.Count == 0) sections = MotorSections(motor).ToList();
+            return new BreakdownView($"{motor.Tag} — {motor.Motor.Power?.Value} motor", sections, range);
+        }
+
+        var feeder = analysis.Feeders.Values.FirstOrDefault(f => position.Line >= f.Feeder.Header.Line.Index && position.Line <= f.Feeder.LastOwnLine);
+        if (feeder is not null)
+            return new BreakdownView($"{feeder.Tag} — feeder, {Format.Amps(feeder.CalculatedLoad)} running load", FeederSections(feeder).ToList(), range);
+        return null;
+    }
+
+    /// <summary>Which sections a statement line shows.</summary>
+    private static bool Belongs(string heading, string? keyword) => keyword switch
+    {
+        "wire" or "conductor" or "ambient" or "ccc" => heading is "Full-load current" or "Branch conductors",
+        "protection" or "hard-start" => heading is "Full-load current" or "Short-circuit and ground-fault protection",
+        "overload" or "nameplate" or "service-factor" or "temp-rise" => heading is "Full-load current" or "Overload",
+        "ground" => heading == "Grounding conductor",
+        "length" or "drop-limit" or "power-factor" => heading == "Voltage drop",
+        "disconnect" => heading == "Disconnecting means",
+        "controller" => heading == "Controller",
+        "conduit" or "raceway" => heading == "Conduit",
+        "code-letter" or "design" => heading == "Locked-rotor current",
+        _ => true,
+    };
+
+    private static IEnumerable<BreakdownSection> MotorSections(MotorResult m)
+    {
+        yield return new BreakdownSection("Full-load current", m.FullLoadCurrent.Steps, m.FullLoadCurrent.Unavailable);
+        if (m.RequiredAmpacity is { } req)
+        {
+            var steps = req.Steps.Concat(m.MinimumWire?.Steps ?? []).ToList();
+            string? verdict = null;
+            if (m.Wire is { } w && m.WireAmpacity?.Value is { } allowable && req.Value is { } needed)
+                verdict = allowable >= needed
+                    ? $"✓ {w} carries {Format.Amps(allowable)} ≥ {Format.Amps(needed)}"
+                    : $"✗ {w} carries only {Format.Amps(allowable)}; {Format.Amps(needed)} is required";
+            yield return new BreakdownSection("Branch conductors", steps, verdict ?? req.Unavailable);
+        }
+
+        if (m.MaximumProtection is { } max)
+            yield return new BreakdownSection("Short-circuit and ground-fault protection", max.Steps,
+                Compare(m.ProtectionRating, max.Value, "rating", atMost: true));
+        if (m.OverloadLimit is { } ol)
+            yield return new BreakdownSection("Overload", ol.Steps.Concat(m.OverloadAbsoluteLimit?.Steps.Skip(1) ?? []).ToList(),
+                ol.Unavailable ?? Compare(m.Overload, ol.Value, "setting", atMost: true));
+        if (m.MinimumGround is { } g)
+            yield return new BreakdownSection("Grounding conductor", g.Steps,
+                m.Ground is { } written && g.Value is { } min ? (written >= min ? $"✓ {written} ≥ {min}" : $"✗ {written} is smaller than {min}") : null);
+        if (m.Disconnect is { } d) yield return new BreakdownSection("Disconnecting means", d.Steps);
+        if (m.Controller is { } c) yield return new BreakdownSection("Controller", c.Steps.Concat(m.NemaStarter?.Steps ?? []).ToList());
+        if (m.BranchDrop is { } vd)
+            yield return new BreakdownSection("Voltage drop", vd.Steps,
+                m.TotalDropPercent is { } total ? $"feeders and branch together: {total:0.##} %" : null);
+        if (m.MinimumConduit is { } conduit)
+            yield return new BreakdownSection("Conduit", conduit.Steps,
+                m.ConduitFillPercent is { } fill ? $"{(fill <= 40 ? "✓" : "✗")} the written conduit is {fill:0.#} % full" : conduit.Unavailable);
+        var lr = (m.LockedRotorFromCodeLetter?.Steps ?? []).Concat(m.LockedRotorTableMaximum?.Steps ?? []).ToList();
+        if (lr.Count > 0) yield return new BreakdownSection("Locked-rotor current", lr);
+    }
+
+    private static IEnumerable<BreakdownSection> FeederSections(FeederResult f)
+    {
+        if (f.RequiredAmpacity is { } req)
+        {
+            string? verdict = null;
+            if (f.Wire is { } w && f.WireAmpacity?.Value is { } allowable && req.Value is { } needed)
+                verdict = allowable >= needed ? $"✓ {w} carries {Format.Amps(allowable)} ≥ {Format.Amps(needed)}" : $"✗ {w} carries only {Format.Amps(allowable)}";
+            yield return new BreakdownSection("Feeder conductors", req.Steps.Concat(f.MinimumWire?.Steps ?? []).ToList(), verdict);
+        }
+
+        if (f.MaximumProtection is { } max)
+            yield return new BreakdownSection("Feeder protection", max.Steps, Compare(f.ProtectionRating, max.Value, "rating", atMost: true) ?? max.Unavailable);
+        if (f.MinimumGround is { } g) yield return new BreakdownSection("Grounding conductor", g.Steps);
+        if (f.Drop is { } vd)
+            yield return new BreakdownSection("Voltage drop", vd.Steps, f.CumulativeDropPercent is { } c ? $"from the source: {c:0.##} %" : null);
+    }
+
+    private static string? Compare(decimal? written, decimal? limit, string what, bool atMost)
+    {
+        if (written is not { } w || limit is not { } l) return null;
+        return atMost && w <= l ? $"✓ the written {what} {Format.Amps(w)} is within {Format.Amps(l)}" : $"✗ the written {what} {Format.Amps(w)} exceeds {Format.Amps(l)}";
+    }
+
+    /// <summary>The short values shown at the end of a motor's header line.</summary>
+    public static string? InlaySummary(MotorResult m, bool flc, bool wire)
+    {
+        var parts = new List<string>();
+        if (flc && m.FullLoadCurrent.Value is { } amps) parts.Add($"FLC {Format.Amps(amps)}");
+        if (wire && m.MinimumWire?.Value is { } w) parts.Add($"min {w}");
+        if (m.MaximumProtection?.Value is { } p && flc) parts.Add($"max {Format.Amps(p)}");
+        return parts.Count == 0 ? null : string.Join(" · ", parts);
+    }
+
+    /// <summary>The feeder totals shown above a feeder.</summary>
+    public static string FeederSummary(FeederResult f) =>
+        string.Join(" · ", new[]
+        {
+            $"load {Format.Amps(f.CalculatedLoad)}",
+            f.MinimumWire?.Value is { } w ? $"min wire {w}" : null,
+            f.MaximumProtection?.Value is { } p ? $"max protection {Format.Amps(p)}" : null,
+        }.OfType<string>());
+
+    internal static string Hp(decimal hp) => Numbers.Horsepower(hp);
+}
