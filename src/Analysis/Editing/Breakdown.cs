@@ -44,7 +44,7 @@ public static class Breakdown
     /// <summary>Which sections a statement line shows.</summary>
     private static bool Belongs(string heading, string? keyword) => keyword switch
     {
-        "wire" or "conductor" or "ambient" or "ccc" => heading is "Full-load current" or "Branch conductors",
+        "wire" or "conductor" or "ambient" or "ccc" => heading is "Full-load current" or "Branch conductors" || heading.StartsWith("Written wire", StringComparison.Ordinal),
         "protection" or "hard-start" => heading is "Full-load current" or "Short-circuit and ground-fault protection",
         "overload" or "nameplate" or "service-factor" or "temp-rise" => heading is "Full-load current" or "Overload",
         "ground" => heading == "Grounding conductor",
@@ -61,13 +61,11 @@ public static class Breakdown
         yield return new BreakdownSection("Full-load current", m.FullLoadCurrent.Steps, m.FullLoadCurrent.Unavailable);
         if (m.RequiredAmpacity is { } req)
         {
-            var steps = req.Steps.Concat(m.MinimumWire?.Steps ?? []).ToList();
-            string? verdict = null;
-            if (m.Wire is { } w && m.WireAmpacity?.Value is { } allowable && req.Value is { } needed)
-                verdict = allowable >= needed
+            yield return new BreakdownSection("Branch conductors", req.Steps.Concat(m.MinimumWire?.Steps ?? []).ToList(), req.Unavailable);
+            if (m.Wire is { } w && m.WireAmpacity is { Value: { } allowable } written && req.Value is { } needed)
+                yield return new BreakdownSection($"Written wire {w}", written.Steps, allowable >= needed
                     ? $"✓ {w} carries {Format.Amps(allowable)} ≥ {Format.Amps(needed)}"
-                    : $"✗ {w} carries only {Format.Amps(allowable)}; {Format.Amps(needed)} is required";
-            yield return new BreakdownSection("Branch conductors", steps, verdict ?? req.Unavailable);
+                    : $"✗ {w} carries only {Format.Amps(allowable)}; {Format.Amps(needed)} is required");
         }
 
         if (m.MaximumProtection is { } max)

@@ -36,7 +36,7 @@ public static class Completion
         if (spec is null) return [];
         var owner = OwnerOf(analysis, position.Line);
         var written = words.Length - 1 - (before.EndsWith(' ') ? 0 : 1);
-        return Values(analysis, spec, owner, written).ToList();
+        return Values(analysis, spec, owner, written, words.Skip(1).ToArray()).ToList();
     }
 
     private static IReadOnlyList<CompletionEntry> Keywords(AnalysisResult analysis, int lineIndex, int indent)
@@ -52,11 +52,13 @@ public static class Completion
         };
         return MotorLang.Parser.Statements.Keywords.AllowedIn(kind)
             .Where(k => k.IsHeader || parent is null || !parent.Has(k.Keyword))
-            .Select((k, i) => new CompletionEntry(k.Keyword, CompletionKind.Keyword, Signature(k), k.Doc, $"{(k.IsHeader ? 1 : 0)}{i:000}"))
+            // The block's own keywords first, then the inherited settings, then headers of new blocks.
+            .Select((k, i) => new CompletionEntry(k.Keyword, CompletionKind.Keyword, Signature(k), k.Doc,
+                $"{(k.IsHeader ? 2 : k.AllowedIn.Contains(BlockKind.Project) && kind != BlockKind.Project ? 1 : 0)}{i:000}"))
             .ToList();
     }
 
-    private static IEnumerable<CompletionEntry> Values(AnalysisResult analysis, KeywordSpec spec, BlockNode? owner, int written)
+    private static IEnumerable<CompletionEntry> Values(AnalysisResult analysis, KeywordSpec spec, BlockNode? owner, int written, string[] words)
     {
         var motor = owner is MotorNode m ? analysis.Motors.GetValueOrDefault(m) : null;
         var feeder = owner is FeederNode f ? analysis.Feeders.GetValueOrDefault(f) : null;
@@ -68,7 +70,8 @@ public static class Completion
                 return WireSizes(motor?.MinimumGround?.Value is { } g ? WireSpec.Single(g) : feeder?.MinimumGround?.Value is { } fg ? WireSpec.Single(fg) : null, null, "NEC 250.122");
             case "protection" when written >= 1:
                 var max = motor?.MaximumProtection?.Value ?? feeder?.MaximumProtection?.Value;
-                return Ratings(max);
+                var fuse = words.Length > 0 && words[0].Contains("fuse", StringComparison.OrdinalIgnoreCase);
+                return Ratings(max, fuse);
             case "from":
                 return analysis.Parse.Model.Feeders.Where(x => x != owner).Select(x => Reference(x));
             case "like":
@@ -101,9 +104,9 @@ public static class Completion
     }
 
     /// <summary>Standard ratings at and below the maximum, the maximum first.</summary>
-    private static IEnumerable<CompletionEntry> Ratings(decimal? max)
+    private static IEnumerable<CompletionEntry> Ratings(decimal? max, bool fuse)
     {
-        var ratings = StandardRatings.For(fuse: true).ToList();
+        var ratings = StandardRatings.For(fuse).ToList();
         foreach (var r in ratings)
         {
             var over = max is { } m && r > m;
