@@ -241,7 +241,7 @@ public sealed class LanguageServerTarget
     /// <summary>Runs a read off the reader thread on the current snapshot; ContentModified if the document moved on meanwhile.</summary>
     private Task<T?> Read<T>(string uri, CancellationToken ct, Func<DocumentSnapshot, T?> read) => Run(() =>
     {
-        var snapshot = _store.Get(uri) ?? throw new LocalRpcException($"{uri} is not open") { ErrorCode = ErrorCodes.InvalidParams };
+        var snapshot = _store.Get(uri) ?? throw new LocalRpcException($"{uri} is not open") { ErrorCode = ErrorCodes.RequestFailed };
         ct.ThrowIfCancellationRequested();
         var result = read(snapshot);
         ct.ThrowIfCancellationRequested();

@@ -1,0 +1,64 @@
+using CsCheck;
+using MotorLang.Server.Protocol;
+
+namespace MotorLang.Server.Tests;
+
+/// <summary>Random sequences of incremental edits keep the server's copy identical to the client's.</summary>
+public class IncrementalEditPropertyTests
+{
+    private static readonly Gen<string> Inserted = Gen.OneOfConst("", "x", " ", "\n", "\r\n", "😀", "°", "泵", "  motor M 5hp\n", "\"", "# c", "ab\ncd");
+
+    /// <summary>An edit as (start fraction, length fraction, text): positions are derived from the current text when applied.</summary>
+    private static readonly Gen<(double Start, double Length, string Text)[]> Edits =
+        Gen.Select(Gen.Double[0, 1], Gen.Double[0, 0.2], Inserted).Array[1, 25];
+
+    [Fact]
+    public async Task ServerCopyMatchesTheClientAfterRandomEdits()
+    {
+        await using var server = await InProcessServer.StartAsync();
+        var client = server.Client;
+        var run = 0;
+        await Edits.SampleAsync(async edits =>
+        {
+            var uri = $"file:///edits/{run++}.motors";
+            var text = "feeder F \"泵站 😀\" 480V 3ph\r\n  motor M-1 15hp\r\n    wire 10 AWG\n";
+            await client.Open(uri, text);
+            var version = 1;
+            foreach (var (startFraction, lengthFraction, insert) in edits)
+            {
+                var start = (int)(startFraction * text.Length);
+                var end = Math.Min(text.Length, start + (int)(lengthFraction * text.Length));
+                // Never split a surrogate pair or a CRLF: a real editor never produces such a range.
+                while (start > 0 && start < text.Length && (char.IsLowSurrogate(text[start]) || (text[start] == '\n' && text[start - 1] == '\r'))) start--;
+                while (end < text.Length && end > 0 && (char.IsLowSurrogate(text[end]) || (text[end] == '\n' && text[end - 1] == '\r'))) end++;
+                end = Math.Max(start, end);
+                var range = new Protocol.Range(PositionOf(text, start), PositionOf(text, end));
+                text = text[..start] + insert + text[end..];
+                await client.Change(uri, ++version, new TextDocumentContentChangeEvent(range, insert));
+            }
+
+            var copy = await client.Request<DocumentTextResult>("motorlang/documentText", new TextDocumentIdentifier(uri));
+            Assert.Equal(version, copy.Version);
+            Assert.Equal(text, copy.Text);
+            await client.Notify("textDocument/didClose", new DidCloseTextDocumentParams(new TextDocumentIdentifier(uri)));
+        }, iter: 100);
+    }
+
+    /// <summary>The LSP position of an offset, counted independently of the server's code: lines end at "\n".</summary>
+    private static Position PositionOf(string text, int offset)
+    {
+        var line = 0;
+        var lineStart = 0;
+        for (var i = 0; i < offset; i++)
+        {
+            if (text[i] != '\n') continue;
+            line++;
+            lineStart = i + 1;
+        }
+
+        var column = offset - lineStart;
+        // A position inside "\r\n" is the end of the line's content.
+        if (offset > 0 && offset <= text.Length && offset - 1 >= lineStart && text[offset - 1] == '\r' && offset < text.Length && text[offset] == '\n') column--;
+        return new Position(line, column);
+    }
+}
