@@ -12,6 +12,9 @@ switch (args)
     case ["time", var n]:
         QuickTiming.Run(int.Parse(n));
         break;
+    case ["memory", var n]:
+        await QuickTiming.ServerMemory(int.Parse(n));
+        break;
     default:
         BenchmarkSwitcher.FromAssembly(typeof(ParseAndFormatBenchmarks).Assembly).Run(args);
         break;

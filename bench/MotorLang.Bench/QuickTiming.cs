@@ -25,6 +25,26 @@ public static class QuickTiming
         }
     }
 
+    /// <summary>`memory N`: the server's managed heap and working set with one N-motor list open and analyzed.</summary>
+    public static async Task ServerMemory(int motors)
+    {
+        var (serverSide, clientSide) = Nerdbank.Streams.FullDuplexStream.CreatePair();
+        var server = MotorLang.Server.LanguageServer.RunAsync(serverSide, serverSide, TextWriter.Null, TimeSpan.Zero);
+        var client = new MotorLang.Server.Tests.LspClient(clientSide, clientSide);
+        await client.InitializeAsync();
+        var before = GC.GetTotalMemory(forceFullCollection: true);
+        var sw = Stopwatch.StartNew();
+        await client.Open("file:///m.motors", MotorListGenerator.Generate(motors));
+        await client.DiagnosticsAsync("file:///m.motors", 1, TimeSpan.FromMinutes(5));
+        Console.WriteLine($"first diagnostics after {sw.Elapsed.TotalMilliseconds:0} ms (cold)");
+        var heap = GC.GetTotalMemory(forceFullCollection: true);
+        using var self = Process.GetCurrentProcess();
+        Console.WriteLine($"managed heap for the open list: {(heap - before) >> 20} MB; process working set {self.WorkingSet64 >> 20} MB (includes the client and generator)");
+        await client.Request<object?>("shutdown", null);
+        await client.Notify("exit");
+        await server;
+    }
+
     private static T Stage<T>(string name, Func<T> work)
     {
         var bytes = GC.GetAllocatedBytesForCurrentThread();

@@ -1,0 +1,79 @@
+using BenchmarkDotNet.Attributes;
+using MotorLang.Server;
+using MotorLang.Server.Protocol;
+using MotorLang.Server.Tests;
+using Nerdbank.Streams;
+
+namespace MotorLang.Bench;
+
+/// <summary>
+/// The language server in-process over a duplex stream, debounce zero, on a list of 10,000 motors
+/// in 100 feeders: first diagnostics after didOpen, a one-character edit to published diagnostics,
+/// hover and completion.
+/// </summary>
+[MemoryDiagnoser]
+public class ServerBenchmarks
+{
+    private const string Uri = "file:///bench/plant.motors";
+    private LspClient _client = null!;
+    private Task<int> _server = null!;
+    private string _text = "";
+    private int _version = 1;
+    private int _opened;
+    private Position _hover = new(0, 0);
+
+    [Params(10_000)]
+    public int Motors { get; set; }
+
+    [GlobalSetup]
+    public void Setup()
+    {
+        var (serverSide, clientSide) = FullDuplexStream.CreatePair();
+        _server = LanguageServer.RunAsync(serverSide, serverSide, TextWriter.Null, TimeSpan.Zero);
+        _client = new LspClient(clientSide, clientSide);
+        _client.InitializeAsync().GetAwaiter().GetResult();
+        _text = MotorListGenerator.Generate(Motors);
+        _client.Open(Uri, _text).GetAwaiter().GetResult();
+        _client.DiagnosticsAsync(Uri, 1, TimeSpan.FromMinutes(2)).GetAwaiter().GetResult();
+        var lines = _text.Split('\n');
+        var wireLine = Array.FindIndex(lines, l => l.StartsWith("    wire ", StringComparison.Ordinal));
+        _hover = new Position(wireLine, 6);
+    }
+
+    [Benchmark]
+    public async Task<int> OpenToFirstDiagnostics()
+    {
+        var uri = $"file:///bench/open{_opened++}.motors";
+        await _client.Open(uri, _text);
+        var p = await _client.DiagnosticsAsync(uri, 1, TimeSpan.FromMinutes(2));
+        await _client.Notify("textDocument/didClose", new DidCloseTextDocumentParams(new TextDocumentIdentifier(uri)));
+        return p.Diagnostics.Length;
+    }
+
+    /// <summary>Types one character into a description and waits for that version's diagnostics.</summary>
+    [Benchmark]
+    public async Task<int> OneCharacterEditToDiagnostics()
+    {
+        var version = ++_version;
+        var at = new Position(0, 2);
+        await _client.Change(Uri, version, new TextDocumentContentChangeEvent(new MotorLang.Server.Protocol.Range(at, at), "x"));
+        var p = await _client.DiagnosticsAsync(Uri, version, TimeSpan.FromMinutes(2));
+        return p.Diagnostics.Length;
+    }
+
+    [Benchmark]
+    public Task<Hover?> Hover() =>
+        _client.Request<Hover?>("textDocument/hover", new TextDocumentPositionParams(new TextDocumentIdentifier(Uri), _hover));
+
+    [Benchmark]
+    public Task<CompletionList> Completion() =>
+        _client.Request<CompletionList>("textDocument/completion", new CompletionParams(new TextDocumentIdentifier(Uri), new Position(_hover.Line, 9)));
+
+    [GlobalCleanup]
+    public void Cleanup()
+    {
+        _client.Request<object?>("shutdown", null).GetAwaiter().GetResult();
+        _client.Notify("exit").GetAwaiter().GetResult();
+        _server.GetAwaiter().GetResult();
+    }
+}
