@@ -3,7 +3,6 @@ using MotorLang.Parser.Model;
 using MotorLang.Parser.Text;
 using MotorLang.Sizing;
 using MotorLang.Sizing.Rules;
-using MotorLang.Sizing.Tables;
 
 namespace MotorLang.Analysis.Editing;
 
@@ -130,6 +129,4 @@ public static class Breakdown
             f.MinimumWire?.Value is { } w ? $"min wire {w}" : null,
             f.MaximumProtection?.Value is { } p ? $"max protection {Format.Amps(p)}" : null,
         }.OfType<string>());
-
-    internal static string Hp(decimal hp) => Numbers.Horsepower(hp);
 }

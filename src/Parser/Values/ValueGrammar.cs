@@ -1,3 +1,4 @@
+using MotorLang.Sizing.Tables;
 using Sprache;
 
 namespace MotorLang.Parser.Values;
@@ -64,27 +65,7 @@ internal static class ValueGrammar
     {
         var unit = Unit.None;
         if (unitText.Length > 0 && !Units.TryParse(unitText, out unit)) unit = Unit.None;
-        return new LexicalValue.Number(digits, ToDecimal(digits), unit, unitText);
-    }
-
-    /// <summary>The numeric value, or null for a fraction with a zero denominator (4/0 as a number).</summary>
-    internal static decimal? ToDecimal(string digits)
-    {
-        try
-        {
-            var dash = digits.IndexOf('-');
-            var slash = digits.IndexOf('/');
-            if (slash < 0) return decimal.Parse(digits, System.Globalization.CultureInfo.InvariantCulture);
-            var whole = dash > 0 ? decimal.Parse(digits[..dash], System.Globalization.CultureInfo.InvariantCulture) : 0m;
-            var fractionText = dash > 0 ? digits[(dash + 1)..] : digits;
-            var parts = fractionText.Split('/');
-            var den = decimal.Parse(parts[1], System.Globalization.CultureInfo.InvariantCulture);
-            if (den == 0) return null;
-            return whole + decimal.Parse(parts[0], System.Globalization.CultureInfo.InvariantCulture) / den;
-        }
-        catch (OverflowException)
-        {
-            return null;
-        }
+        // Null for a fraction with a zero denominator: 4/0 is a wire size, not a number.
+        return new LexicalValue.Number(digits, Numbers.Parse(digits), unit, unitText);
     }
 }
