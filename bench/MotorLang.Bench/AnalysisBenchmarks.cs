@@ -6,6 +6,7 @@ namespace MotorLang.Bench;
 
 /// <summary>Analysis (sizing every motor and feeder) of an already parsed list, for 1k / 10k / 100k motors.</summary>
 [MemoryDiagnoser]
+[GcConcurrent(false)] // as the shipped motorlang executable runs
 public class AnalysisBenchmarks
 {
     private ParseResult _parsed = null!;

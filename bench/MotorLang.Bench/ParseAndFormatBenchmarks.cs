@@ -6,6 +6,7 @@ namespace MotorLang.Bench;
 
 /// <summary>Parse to the model, and format, for 1k / 10k / 100k motors, to show cost grows linearly.</summary>
 [MemoryDiagnoser]
+[GcConcurrent(false)] // as the shipped motorlang executable runs
 public class ParseAndFormatBenchmarks
 {
     private string _text = "";

@@ -12,6 +12,7 @@ namespace MotorLang.Bench;
 /// hover and completion.
 /// </summary>
 [MemoryDiagnoser]
+[GcConcurrent(false)] // as the shipped motorlang executable runs
 public class ServerBenchmarks
 {
     private const string Uri = "file:///bench/plant.motors";

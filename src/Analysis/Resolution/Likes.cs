@@ -8,6 +8,12 @@ public static class Likes
     /// <summary>The motor, then the motor it is like, and so on; stops at a cycle or an unknown tag.</summary>
     public static IEnumerable<MotorNode> Chain(MotorNode motor)
     {
+        if (motor.Like is null) return [motor];
+        return Walk(motor);
+    }
+
+    private static IEnumerable<MotorNode> Walk(MotorNode motor)
+    {
         var seen = new HashSet<MotorNode>();
         var model = Root(motor);
         for (MotorNode? m = motor; m is not null && seen.Add(m); m = m.Like is { } l ? model?.Find(l.Value) as MotorNode : null)
@@ -28,7 +34,7 @@ public static class Likes
         return null;
     }
 
-    public static bool Has(MotorNode motor, Func<MotorNode, bool> has) => Chain(motor).Any(has);
+    public static bool Has(MotorNode motor, Func<MotorNode, bool> has) => motor.Like is null ? has(motor) : Chain(motor).Any(has);
 
     private static MotorList? Root(MotorNode motor) => motor.Feeder.Model;
 }

@@ -91,7 +91,7 @@ internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode
         if (r.WireAmpacity.Value is { } allowable && allowable < required && r.MinimumWire?.Value is { } minimum)
             Add(FindingCodes.FeederWireUndersized, Severity.Error, wire.Range,
                 $"feeder wire {wire.Value} carries {Format.Amps(allowable)} here; NEC 430.24 requires {Format.Amps(required)}: use {minimum}",
-                new Fix($"Change the feeder wire to {minimum}", [EditBuilder.Replace(feeder.Statements["wire"].Arg("size")!, minimum.ToString())]));
+                new Fix($"Change the feeder wire to {minimum}", [EditBuilder.Replace(feeder.Statement("wire")!.Arg("size")!, minimum.ToString())]));
     }
 
     private void CheckProtection(FeederNode feeder, FeederResult r)
@@ -110,14 +110,14 @@ internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode
         {
             Add(FindingCodes.NotWritten, Severity.Information, feeder.Protection.Range,
                 $"no rating given; NEC 430.62(A) allows up to {Format.Amps(max)}",
-                new Fix("Add the maximum rating", [EditBuilder.Append(feeder.Statements["protection"], text)]));
+                new Fix("Add the maximum rating", [EditBuilder.Append(feeder.Statement("protection")!, text)]));
             return;
         }
 
         if (rating.Value.Value > max)
             Add(FindingCodes.FeederProtectionTooLarge, Severity.Error, rating.Range,
                 $"feeder protection {Format.Amps(rating.Value.Value)} is above the {Format.Amps(max)} NEC 430.62(A) allows (largest branch device plus the other loads, rounded down)",
-                new Fix($"Change the rating to {text}", [EditBuilder.Replace(feeder.Statements["protection"].Arg("rating")!, text)]));
+                new Fix($"Change the rating to {text}", [EditBuilder.Replace(feeder.Statement("protection")!.Arg("rating")!, text)]));
     }
 
     private void CheckGround(FeederNode feeder, FeederResult r, Settings settings)
@@ -140,7 +140,7 @@ internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode
         if (ground.Value.Size < min)
             Add(FindingCodes.GroundUndersized, Severity.Error, ground.Range,
                 $"grounding conductor {ground.Value.Size} is smaller than the {min} NEC 250.122 requires for {Format.Amps(device)}",
-                new Fix($"Change the grounding conductor to {min}", [EditBuilder.Replace(feeder.Statements["ground"].Arg("size")!, min.ToString())]));
+                new Fix($"Change the grounding conductor to {min}", [EditBuilder.Replace(feeder.Statement("ground")!.Arg("size")!, min.ToString())]));
     }
 
     /// <summary>The feeder and every feeder supplied from it, directly or further down.</summary>

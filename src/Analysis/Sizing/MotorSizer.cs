@@ -168,7 +168,7 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
 
         if (rating is null)
         {
-            var statement = deviceOwner!.Statements["protection"];
+            var statement = deviceOwner!.Statement("protection")!;
             Add(FindingCodes.NotWritten, Severity.Information, device.Range,
                 $"no rating given; NEC 430.52 allows this {deviceName} up to {Format.Amps(max)}",
                 deviceOwner == motor ? new Fix($"Add the maximum {unit}", [EditBuilder.Append(statement, maxText)]) : null);
@@ -237,7 +237,7 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
     private void CheckDisconnectAndController(MotorNode motor, MotorResult r, decimal flc)
     {
         r.Disconnect = cache.Disconnect(flc, r.Horsepower);
-        r.Controller = Controllers.MinimumHorsepower(r.Horsepower);
+        r.Controller = cache.Controller(r.Horsepower);
         (r.NemaStarter, var size) = cache.Nema(r.Horsepower, r.Volts);
         r.NemaStarterSize = r.NemaStarter.HasValue ? size : null;
         var need = r.Disconnect.Value!.Value;
@@ -306,12 +306,12 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
                 ReplaceOrOverride(motor, owner, "conduit", "trade-size", $"{smallest}in", $"Change the conduit to {smallest} in"));
     }
 
-    private static void LockedRotor(MotorNode motor, MotorResult r, Phases phases, DesignLetter? design)
+    private void LockedRotor(MotorNode motor, MotorResult r, Phases phases, DesignLetter? design)
     {
-        if (Get(motor, m => m.CodeLetter) is { } letter && phases != Phases.Dc)
-            r.LockedRotorFromCodeLetter = global::MotorLang.Sizing.Rules.LockedRotor.FromCodeLetter(r.Horsepower, r.Volts, phases, letter.Value);
-        if (phases != Phases.Dc)
-            r.LockedRotorTableMaximum = global::MotorLang.Sizing.Rules.LockedRotor.TableMaximum(r.Horsepower, r.Volts, phases, design ?? DesignLetter.B);
+        if (phases == Phases.Dc) return;
+        if (Get(motor, m => m.CodeLetter) is { } letter)
+            r.LockedRotorFromCodeLetter = cache.LockedRotorFromCodeLetter(r.Horsepower, r.Volts, phases, letter.Value);
+        r.LockedRotorTableMaximum = cache.LockedRotorMaximum(r.Horsepower, r.Volts, phases, design ?? DesignLetter.B);
     }
 
     private static Located<T>? Get<T>(MotorNode motor, Func<MotorNode, Located<T>?> get) => Likes.Get(motor, get)?.Value;
@@ -336,7 +336,7 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
     /// <summary>Replace the value where it is written on this motor, or add an overriding line when it is inherited.</summary>
     private Fix ReplaceOrOverride(MotorNode motor, MotorNode? owner, string keyword, string arg, string value, string title, string? overrideText = null)
     {
-        if (owner == motor && motor.Statements.TryGetValue(keyword, out var s) && s.Arg(arg) is { } a)
+        if (owner == motor && motor.Statement(keyword) is { } s && s.Arg(arg) is { } a)
             return new Fix(title, [EditBuilder.Replace(a, value)]);
         return new Fix(title + " on this motor", [edits.Insert(motor, overrideText ?? $"{keyword} {value}")]);
     }

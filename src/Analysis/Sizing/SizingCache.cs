@@ -22,6 +22,9 @@ internal sealed class SizingCache
     private readonly Dictionary<(RacewayContents, RacewayType, string), Result<TradeSize>> _conduit = [];
     private readonly Dictionary<(decimal, decimal), Result<DisconnectRating>> _disconnect = [];
     private readonly Dictionary<(decimal, decimal), (Result<int> Result, string Size)> _nema = [];
+    private readonly Dictionary<decimal, Result<decimal>> _controller = [];
+    private readonly Dictionary<(decimal, decimal, Phases, DesignLetter?), Result<decimal>> _lockedRotorMax = [];
+    private readonly Dictionary<(decimal, decimal, Phases, CodeLetter), Result<CurrentRange>> _codeLetter = [];
 
     public Result<decimal> DesignCurrent(MotorRating m) => Memo(_current, m, MotorCurrent.DesignCurrent);
 
@@ -53,6 +56,14 @@ internal sealed class SizingCache
 
     public (Result<int> Result, string Size) Nema(decimal hp, decimal volts) =>
         Memo(_nema, (hp, volts), k => (Controllers.NemaSize(k.Item1, k.Item2, out var size), size));
+
+    public Result<decimal> Controller(decimal hp) => Memo(_controller, hp, Controllers.MinimumHorsepower);
+
+    public Result<decimal> LockedRotorMaximum(decimal hp, decimal volts, Phases phases, DesignLetter? design) =>
+        Memo(_lockedRotorMax, (hp, volts, phases, design), k => LockedRotor.TableMaximum(k.Item1, k.Item2, k.Item3, k.Item4));
+
+    public Result<CurrentRange> LockedRotorFromCodeLetter(decimal hp, decimal volts, Phases phases, CodeLetter letter) =>
+        Memo(_codeLetter, (hp, volts, phases, letter), k => LockedRotor.FromCodeLetter(k.Item1, k.Item2, k.Item3, k.Item4));
 
     private static TValue Memo<TKey, TValue>(Dictionary<TKey, TValue> cache, TKey key, Func<TKey, TValue> compute) where TKey : notnull
     {

@@ -11,7 +11,11 @@ namespace MotorLang.Parser.Model;
 /// </summary>
 public abstract class BlockNode
 {
-    private readonly Dictionary<string, Statement> _statements = new(StringComparer.OrdinalIgnoreCase);
+    // A block has a handful of statements: a list searched by keyword costs less than a dictionary
+    // per block, and a list of 10,000 motors has 10,000 blocks.
+    private readonly List<Statement> _statements = new(8);
+    private static int _nextId;
+    private readonly int _id = Interlocked.Increment(ref _nextId);
 
     protected BlockNode(Statement header, BlockNode? parent)
     {
@@ -26,7 +30,23 @@ public abstract class BlockNode
     public BlockNode? Parent { get; }
 
     /// <summary>The statements of this block other than its header, by keyword.</summary>
-    public IReadOnlyDictionary<string, Statement> Statements => _statements;
+    public IReadOnlyDictionary<string, Statement> Statements => _statements.ToDictionary(s => s.Keyword, StringComparer.OrdinalIgnoreCase);
+
+    /// <summary>This block's statement with the given keyword, if written.</summary>
+    public Statement? Statement(string keyword)
+    {
+        foreach (var s in _statements)
+        {
+            if (string.Equals(s.Keyword, keyword, StringComparison.OrdinalIgnoreCase)) return s;
+        }
+
+        return null;
+    }
+
+    /// <summary>Blocks are compared by identity; a stored number makes them cheap dictionary keys.</summary>
+    public override int GetHashCode() => _id;
+
+    public override bool Equals(object? obj) => ReferenceEquals(this, obj);
 
     /// <summary>The last line that belongs to the block, children included.</summary>
     public int LastLine { get; internal set; }
@@ -40,8 +60,8 @@ public abstract class BlockNode
     /// <summary>Adds a statement; returns the earlier one when the keyword was already given.</summary>
     internal Statement? Add(Statement s)
     {
-        if (_statements.TryGetValue(s.Keyword, out var earlier)) return earlier;
-        _statements[s.Keyword] = s;
+        if (Statement(s.Keyword) is { } earlier) return earlier;
+        _statements.Add(s);
         return null;
     }
 
@@ -50,16 +70,16 @@ public abstract class BlockNode
     {
         var statement = string.Equals(keyword, Header.Keyword, StringComparison.OrdinalIgnoreCase)
             ? Header
-            : _statements.GetValueOrDefault(keyword);
+            : Statement(keyword);
         return statement?.Arg(arg) is { Value: T value } a ? new Located<T>(value, a.Range) : null;
     }
 
     /// <summary>An argument's text as the formatter writes it (e.g. the insulation name).</summary>
     public Located<string>? GetText(string keyword, string arg) =>
-        (string.Equals(keyword, Header.Keyword, StringComparison.OrdinalIgnoreCase) ? Header : _statements.GetValueOrDefault(keyword))
+        (string.Equals(keyword, Header.Keyword, StringComparison.OrdinalIgnoreCase) ? Header : Statement(keyword))
             ?.Arg(arg) is { } a ? new Located<string>(a.Canonical, a.Range) : null;
 
-    public bool Has(string keyword) => _statements.ContainsKey(keyword);
+    public bool Has(string keyword) => Statement(keyword) is not null;
 
     // Installation settings, as written on this block only (inheritance is resolved by analysis).
     public Located<Quantity>? Ambient => Get<Quantity>("ambient", "temperature");
