@@ -59,6 +59,17 @@ public class MotorCurrentTests
         Assert.Contains(r.Steps, s => s.Rule == "common practice, no source");
     }
 
+    // NFPA 70-2023 Table 430.250 note: synchronous at 0.8 PF = unity-PF current x 1.25 (100 hp 460 V: 101 x 1.25 = 126.25 A),
+    // at 0.9 PF x 1.1 (111.1 A); other power factors are not tabulated.
+    [Theory]
+    [InlineData(0.8, 126.25)]
+    [InlineData(0.9, 111.1)]
+    public void SynchronousPowerFactorNote(decimal pf, decimal expected)
+    {
+        Assert.Equal(expected, MotorCurrent.DesignCurrent(new MotorRating(100, false, 460, Phases.Three, MotorKind.Synchronous, PowerFactor: pf)).Value);
+        Assert.False(MotorCurrent.DesignCurrent(new MotorRating(100, false, 460, Phases.Three, MotorKind.Synchronous, PowerFactor: 0.7m)).HasValue);
+    }
+
     // Table 430.250 synchronous column: 100 hp 460 V unity PF -> 101 A; Table 430.247: 10 hp 240 V dc -> 38 A.
     [Fact]
     public void SynchronousAndDcTables()

@@ -46,7 +46,8 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
         var efficiency = Get(motor, m => m.Efficiency)?.Value ?? Efficiency.Standard;
         var nameplate = Get(motor, m => m.Nameplate)?.Value.Value;
         var basis = Get(motor, m => m.Application)?.Value ?? NameplateBasis.None;
-        var rating = new MotorRating(power.Value.Value, power.Value.Unit == Unit.Kw, ratedVolts, phases, kind, design, efficiency, basis, nameplate);
+        var ratedPf = Get(motor, m => m.RatedPowerFactor)?.Value ?? 1.0m;
+        var rating = new MotorRating(power.Value.Value, power.Value.Unit == Unit.Kw, ratedVolts, phases, kind, design, efficiency, basis, nameplate, ratedPf);
         r.Horsepower = power.Value.Unit == Unit.Kw
             ? MotorCurrent.Lookup(rating)?.Horsepower ?? power.Value.Value / MotorCurrent.KilowattsPerHorsepower
             : power.Value.Value;

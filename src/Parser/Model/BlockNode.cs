@@ -147,6 +147,7 @@ public sealed class MotorNode(Statement header, FeederNode feeder) : CircuitNode
     public Located<CodeLetter>? CodeLetter => Get<CodeLetter>("code-letter", "letter");
     public Located<MotorKind>? Kind => Get<MotorKind>("kind", "kind");
     public Located<Efficiency>? Efficiency => Get<Efficiency>("efficiency", "class");
+    public Located<decimal>? RatedPowerFactor => Get<decimal>("rated-pf", "value");
     public Located<DutyKind>? Duty => Get<DutyKind>("duty", "duty");
     public Located<Quantity>? DutyRating => Get<Quantity>("duty", "rating");
     public Located<StartingMethod>? Starting => Get<StartingMethod>("starting", "method");

@@ -54,6 +54,17 @@ public static class MotorCurrent
                 $"{lookup.TableName} has no value for {Numbers.Horsepower(lookup.Horsepower)} hp at {lookup.Table.Columns[lookup.Column]} V; give the nameplate current");
         steps.Add(Step.Amps("Full-load current", flc.Value, $"NEC 430.6(A)(1), {lookup.TableName}",
             $"{Numbers.Horsepower(lookup.Horsepower)} hp, {lookup.Table.Columns[lookup.Column]} V column"));
+        if (m.Kind == MotorKind.Synchronous && m.PowerFactor != 1.0m)
+        {
+            // Table 430.250 note: for 90 and 80 percent power factor, multiply by 1.1 and 1.25.
+            var factor = m.PowerFactor switch { 0.9m => 1.1m, 0.8m => 1.25m, _ => 0m };
+            if (factor == 0m)
+                return new Result<decimal>(null, [.. steps], $"Table 430.250 gives synchronous currents for 1.0, 0.9 and 0.8 power factor only; give the nameplate current");
+            flc = flc.Value * factor;
+            steps.Add(Step.Amps("Full-load current at rated power factor", flc.Value, "NEC Table 430.250, note",
+                $"{Format.Number(m.PowerFactor)} power factor: × {Format.Number(factor)}"));
+        }
+
         return new Result<decimal>(flc, [.. steps]);
     }
 

@@ -15,4 +15,5 @@ public sealed record MotorRating(
     DesignLetter? Design = null,
     Efficiency Efficiency = Efficiency.Standard,
     NameplateBasis Basis = NameplateBasis.None,
-    decimal? NameplateAmps = null);
+    decimal? NameplateAmps = null,
+    decimal PowerFactor = 1.0m);
