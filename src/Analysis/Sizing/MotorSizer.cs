@@ -324,15 +324,15 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
         return found?.Value;
     }
 
-    /// <summary>A finding about an inherited value is shown on this motor's 'like' line, not on the other motor.</summary>
-    private SourceRange RangeOn(MotorNode motor, MotorNode? owner, SourceRange valueRange)
+    /// <summary>Where a finding goes, and the motor its value was inherited from (null when written here).</summary>
+    private readonly record struct Place(SourceRange Range, MotorNode? InheritedFrom)
     {
-        if (owner is null || owner == motor) return valueRange;
-        _pendingOwner = owner;
-        return motor.Like?.Range ?? motor.Header.KeywordToken.Range;
+        public static implicit operator Place(SourceRange range) => new(range, null);
     }
 
-    private MotorNode? _pendingOwner;
+    /// <summary>A finding about an inherited value is shown on this motor's 'like' line, not on the other motor.</summary>
+    private static Place RangeOn(MotorNode motor, MotorNode? owner, SourceRange valueRange) =>
+        owner is null || owner == motor ? valueRange : new Place(motor.Like?.Range ?? motor.Header.KeywordToken.Range, owner);
 
     /// <summary>Replace the value where it is written on this motor, or add an overriding line when it is inherited.</summary>
     private Fix ReplaceOrOverride(MotorNode motor, MotorNode? owner, string keyword, string arg, string value, string title, string? overrideText = null)
@@ -344,12 +344,11 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
 
     private Fix Insert(MotorNode motor, string statement, string title) => new(title, [edits.Insert(motor, statement)]);
 
-    private void Add(string code, Severity severity, SourceRange range, string message, Fix? fix = null)
+    private void Add(string code, Severity severity, Place place, string message, Fix? fix = null)
     {
-        var finding = new Finding(code, severity, range, message, fix);
+        var finding = new Finding(code, severity, place.Range, message, fix);
         findings.Add(finding);
-        if (_pendingOwner is { } owner) Inherited.Add((finding, owner));
-        _pendingOwner = null;
+        if (place.InheritedFrom is { } owner) Inherited.Add((finding, owner));
     }
 
     private static decimal HorsepowerOf(Quantity q) => q.Unit == Unit.Kw ? q.Value / MotorCurrent.KilowattsPerHorsepower : q.Value;
