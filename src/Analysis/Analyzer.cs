@@ -41,6 +41,13 @@ public static class Analyzer
 {
     public static AnalysisResult Analyze(string text) => Analyze(DocumentParser.Parse(text));
 
+    /// <summary>
+    /// The previous analysis for a re-read document whose model is the very same object (an edit
+    /// inside a comment or blank line): every result and finding still holds. Null otherwise.
+    /// </summary>
+    public static AnalysisResult? Reuse(AnalysisResult previous, ParseResult parse) =>
+        ReferenceEquals(previous.Parse.Model, parse.Model) ? new AnalysisResult(parse, previous.Motors, previous.Feeders, previous.Findings) : null;
+
     public static AnalysisResult Analyze(ParseResult parse)
     {
         var findings = parse.Diagnostics.Select(Finding.From).ToList();

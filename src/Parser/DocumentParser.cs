@@ -49,11 +49,59 @@ public static class DocumentParser
         return new ParseResult(new SyntaxTree(text, hasBom, lines, sorted), model, sorted);
     }
 
+    /// <summary>
+    /// After an edit that stayed inside one line, re-reads just that line when it was and still is
+    /// a comment or blank line: such an edit cannot change the model, so the model and diagnostics
+    /// are kept and only the tree gets the new line. Returns null when that does not hold, and the
+    /// caller parses the whole text.
+    /// </summary>
+    public static ParseResult? ReparseCommentLine(ParseResult previous, string newText, int lineIndex)
+    {
+        var lines = previous.Tree.Lines;
+        if (lineIndex < 0 || lineIndex >= lines.Length) return null;
+        var old = lines[lineIndex];
+        if (old.InConflict || old.Kind is not (LineKind.Comment or LineKind.Blank)) return null;
+        var hasBom = newText.Length > 0 && newText[0] == '\uFEFF';
+        if (hasBom != previous.Tree.HasBom || newText.Length > MaxChars || newText.AsSpan().IndexOf('\0') >= 0) return null;
+
+        // The edit must have kept every line break where it was: same count, and this line's bounds.
+        var start = hasBom ? 1 : 0;
+        var breaks = 0;
+        var lineStart = -1;
+        var lineEnd = -1;
+        for (var i = start; i <= newText.Length; i++)
+        {
+            if (breaks == lineIndex && lineStart < 0) lineStart = i;
+            if (i == newText.Length || newText[i] == '\n')
+            {
+                if (breaks == lineIndex) lineEnd = i;
+                if (i < newText.Length) breaks++;
+            }
+        }
+
+        if (breaks != lines.Length - 1 || lineStart < 0 || lineEnd < 0) return null;
+        var ending = lineEnd < newText.Length ? "\n" : "";
+        if (ending.Length > 0 && lineEnd > lineStart && newText[lineEnd - 1] == '\r')
+        {
+            ending = "\r\n";
+            lineEnd--;
+        }
+
+        if (ending != old.LineEnding) return null;
+        var content = newText[lineStart..lineEnd];
+        if (SyntaxLine.IsConflictMarker(content)) return null;
+        var diagnostics = new List<Diagnostic>();
+        var line = LineScanner.ScanSingle(lineIndex, content, ending, diagnostics);
+        if (line.Tokens.Length > 0 || diagnostics.Count > 0) return null;
+        var tree = new SyntaxTree(newText, hasBom, lines.SetItem(lineIndex, line), previous.Tree.Diagnostics);
+        return previous with { Tree = tree };
+    }
+
     private static ParseResult Unreadable(string text, bool hasBom, List<Diagnostic> diagnostics)
     {
         // Keep the text as one opaque line so printing the tree still gives the input back.
         var start = hasBom ? 1 : 0;
-        var line = new SyntaxLine(0, 0, text, start, text.Length - start, "", 0, false, [], null, inConflict: false) { IsBroken = true };
+        var line = new SyntaxLine(0, text, start, text.Length - start, "", 0, false, [], null, inConflict: false) { IsBroken = true };
         var diags = diagnostics.ToImmutableArray();
         return new ParseResult(new SyntaxTree(text, hasBom, [line], diags), new MotorList(null, [], new(StringComparer.OrdinalIgnoreCase)), diags);
     }

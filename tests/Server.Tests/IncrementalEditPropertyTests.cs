@@ -6,7 +6,7 @@ namespace MotorLang.Server.Tests;
 /// <summary>Random sequences of incremental edits keep the server's copy identical to the client's.</summary>
 public class IncrementalEditPropertyTests
 {
-    private static readonly Gen<string> Inserted = Gen.OneOfConst("", "x", " ", "\n", "\r\n", "😀", "°", "泵", "  motor M 5hp\n", "\"", "# c", "ab\ncd");
+    private static readonly Gen<string> Inserted = Gen.OneOfConst("", "x", " ", "\n", "\r\n", "😀", "°", "泵", "  motor M 5hp\n", "\"", "# c", "ab\ncd", "#", "  # note ", "1");
 
     /// <summary>An edit as (start fraction, length fraction, text): positions are derived from the current text when applied.</summary>
     private static readonly Gen<(double Start, double Length, string Text)[]> Edits =
@@ -20,7 +20,7 @@ public class IncrementalEditPropertyTests
         var run = 0;
         await Edits.SampleAsync(async edits =>
         {
-            var uri = $"file:///edits/{run++}.motors";
+            var uri = $"file:///edits/{Interlocked.Increment(ref run)}.motors";
             var text = "feeder F \"泵站 😀\" 480V 3ph\r\n  motor M-1 15hp\r\n    wire 10 AWG\n";
             await client.Open(uri, text);
             var version = 1;
@@ -40,8 +40,14 @@ public class IncrementalEditPropertyTests
             var copy = await client.Request<DocumentTextResult>("motorlang/documentText", new TextDocumentIdentifier(uri));
             Assert.Equal(version, copy.Version);
             Assert.Equal(text, copy.Text);
+
+            // Whatever path the server took (a comment-line edit reuses the previous analysis), the
+            // diagnostics are those of a fresh analysis of the same text.
+            var published = await client.DiagnosticsAsync(uri, version);
+            var fresh = Analysis.Analyzer.Analyze(text).Findings;
+            Assert.Equal(fresh.Select(f => $"{f.Code} {f.Range}"), published.Diagnostics.Select(d => $"{d.Code} {d.Range.Start.Line + 1}:{d.Range.Start.Character + 1}-{d.Range.End.Line + 1}:{d.Range.End.Character + 1}"));
             await client.Notify("textDocument/didClose", new DidCloseTextDocumentParams(new TextDocumentIdentifier(uri)));
-        }, iter: 100);
+        }, iter: 100, threads: 1);
     }
 
     /// <summary>The LSP position of an offset, counted independently of the server's code: lines end at "\n".</summary>

@@ -55,7 +55,7 @@ public sealed class LspClient : IAsyncDisposable
             if (_latest.TryGetValue(uri, out var seen) && Match(seen)) return Task.FromResult(seen);
             var tcs = new TaskCompletionSource<PublishDiagnosticsParams>(TaskCreationOptions.RunContinuationsAsynchronously);
             _waiters.Add((Match, tcs));
-            return tcs.Task.WaitAsync(timeout ?? TimeSpan.FromSeconds(30));
+            return tcs.Task.WaitAsync(timeout ?? TimeSpan.FromSeconds(60));
         }
     }
 

@@ -45,7 +45,7 @@ internal static class LineScanner
 
             var content = text.AsSpan(offset, contentEnd - offset);
             var inConflict = TrackConflict(content, index, ref conflictOpen, diagnostics);
-            lines.Add(ScanLine(text, index, offset, start, content, ending, inConflict, diagnostics, pool, tokens));
+            lines.Add(ScanLine(text, index, offset, content, ending, inConflict, diagnostics, pool, tokens));
             index++;
             if (next > text.Length) break;
             offset = next;
@@ -53,6 +53,10 @@ internal static class LineScanner
 
         return lines.ToImmutable();
     }
+
+    /// <summary>Scans one line on its own (its text is the whole source), for re-reading a single edited line.</summary>
+    public static SyntaxLine ScanSingle(int index, string content, string ending, List<Diagnostic> diagnostics) =>
+        ScanLine(content, index, 0, content.AsSpan(), ending, inConflict: false, diagnostics, new StringPool(), []);
 
     private static bool TrackConflict(ReadOnlySpan<char> content, int line, ref bool open, List<Diagnostic> diagnostics)
     {
@@ -74,7 +78,7 @@ internal static class LineScanner
         return true;
     }
 
-    private static SyntaxLine ScanLine(string text, int index, int offset, int start, ReadOnlySpan<char> content, string ending,
+    private static SyntaxLine ScanLine(string text, int index, int offset, ReadOnlySpan<char> content, string ending,
         bool inConflict, List<Diagnostic> diagnostics, StringPool pool, List<SyntaxToken> tokens)
     {
         tokens.Clear();
@@ -123,7 +127,7 @@ internal static class LineScanner
             tokens.Add(new SyntaxToken(TokenKind.Word, index, startCol, pool.Get(content[startCol..i])));
         }
 
-        return new SyntaxLine(index, offset - start, text, offset, content.Length, ending, indent, hasTab,
+        return new SyntaxLine(index, text, offset, content.Length, ending, indent, hasTab,
             ImmutableArray.CreateRange(tokens), comment, inConflict);
     }
 

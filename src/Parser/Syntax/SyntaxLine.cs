@@ -17,11 +17,10 @@ public sealed class SyntaxLine
     private readonly int _length;
     private string? _content;
 
-    internal SyntaxLine(int index, int offset, string source, int start, int length, string lineEnding, int indentWidth, bool indentHasTab,
+    internal SyntaxLine(int index, string source, int start, int length, string lineEnding, int indentWidth, bool indentHasTab,
         ImmutableArray<SyntaxToken> tokens, SyntaxToken? comment, bool inConflict)
     {
         Index = index;
-        Offset = offset;
         _source = source;
         _start = start;
         _length = length;
@@ -34,9 +33,6 @@ public sealed class SyntaxLine
     }
 
     public int Index { get; }
-
-    /// <summary>Offset of the first character of the line in the document text (after any BOM).</summary>
-    public int Offset { get; }
 
     /// <summary>The line without its ending. Sliced from the document on first use, to keep parsing light.</summary>
     public string Content => _content ??= _source.Substring(_start, _length);

@@ -12,13 +12,28 @@ public sealed class DocumentSnapshot
     private readonly Lazy<ParseResult> _parse;
     private readonly Lazy<AnalysisResult> _analysis;
 
-    public DocumentSnapshot(string uri, int version, string text)
+    public DocumentSnapshot(string uri, int version, string text) : this(uri, version, text, null, null)
+    {
+    }
+
+    /// <summary>
+    /// A snapshot after an edit inside line <paramref name="editedLine"/> of <paramref name="previous"/>:
+    /// when that line was and stays a comment or blank line, the previous model and analysis are
+    /// reused, since such an edit cannot change them. Only an already-analyzed previous snapshot is
+    /// used, so snapshots never form a chain that keeps old texts alive.
+    /// </summary>
+    public DocumentSnapshot(string uri, int version, string text, DocumentSnapshot? previous, int? editedLine)
     {
         Uri = uri;
         Version = version;
         Text = text;
-        _parse = new Lazy<ParseResult>(() => DocumentParser.Parse(text), LazyThreadSafetyMode.ExecutionAndPublication);
-        _analysis = new Lazy<AnalysisResult>(() => Analyzer.Analyze(_parse.Value), LazyThreadSafetyMode.ExecutionAndPublication);
+        var before = previous is not null && editedLine is not null && previous._analysis.IsValueCreated ? previous._analysis.Value : null;
+        _parse = new Lazy<ParseResult>(
+            () => (before is not null ? DocumentParser.ReparseCommentLine(before.Parse, text, editedLine!.Value) : null) ?? DocumentParser.Parse(text),
+            LazyThreadSafetyMode.ExecutionAndPublication);
+        _analysis = new Lazy<AnalysisResult>(
+            () => (before is not null ? Analyzer.Reuse(before, _parse.Value) : null) ?? Analyzer.Analyze(_parse.Value),
+            LazyThreadSafetyMode.ExecutionAndPublication);
     }
 
     public string Uri { get; }

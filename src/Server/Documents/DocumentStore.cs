@@ -24,9 +24,14 @@ public sealed class DocumentStore
         lock (_gate)
         {
             if (!_documents.TryGetValue(uri, out var current)) return null;
-            return _documents[uri] = new DocumentSnapshot(uri, version, TextChanges.Apply(current.Text, changes));
+            var list = changes as IReadOnlyList<TextDocumentContentChangeEvent> ?? changes.ToList();
+            return _documents[uri] = new DocumentSnapshot(uri, version, TextChanges.Apply(current.Text, list), current, SingleLine(list));
         }
     }
+
+    /// <summary>The line an edit stayed inside, when there is exactly one change and it neither removes nor adds a line break.</summary>
+    private static int? SingleLine(IReadOnlyList<TextDocumentContentChangeEvent> changes) =>
+        changes is [{ Range: { } r } c] && r.Start.Line == r.End.Line && c.Text.IndexOfAny(['\n', '\r']) < 0 ? r.Start.Line : null;
 
     public bool Close(string uri)
     {

@@ -11,12 +11,19 @@ namespace MotorLang.Server.Features;
 public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> publish, TimeSpan debounce, Action<string> log)
 {
     private readonly ConcurrentDictionary<string, CancellationTokenSource> _pending = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, int> _published = new(StringComparer.Ordinal);
+    private readonly SemaphoreSlim _publishing = new(1, 1);
 
     public void Schedule(DocumentSnapshot snapshot)
     {
         var cts = new CancellationTokenSource();
-        var previous = _pending.AddOrUpdate(snapshot.Uri, cts, (_, _) => cts);
-        if (previous != cts) previous.Cancel();
+        CancellationTokenSource? previous = null;
+        _pending.AddOrUpdate(snapshot.Uri, cts, (_, old) =>
+        {
+            previous = old;
+            return cts;
+        });
+        previous?.Cancel();
         _ = RunAsync(snapshot, cts);
     }
 
@@ -24,7 +31,16 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
     public async Task ClearAsync(string uri)
     {
         if (_pending.TryRemove(uri, out var cts)) await cts.CancelAsync();
-        await publish(new PublishDiagnosticsParams(uri, null, []));
+        await _publishing.WaitAsync();
+        try
+        {
+            _published.Remove(uri);
+            await publish(new PublishDiagnosticsParams(uri, null, []));
+        }
+        finally
+        {
+            _publishing.Release();
+        }
     }
 
     private async Task RunAsync(DocumentSnapshot snapshot, CancellationTokenSource cts)
@@ -36,7 +52,19 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
             var analysis = await Task.Run(() => snapshot.Analysis, ct);
             if (ct.IsCancellationRequested) return;
             var diagnostics = analysis.Findings.Select(f => Convert.ToLsp(f, snapshot.Uri)).ToArray();
-            await publish(new PublishDiagnosticsParams(snapshot.Uri, snapshot.Version, diagnostics));
+            // One publication at a time, and never an older version after a newer one: an analysis
+            // that lost the race to its cancellation must not overwrite fresher diagnostics.
+            await _publishing.WaitAsync(CancellationToken.None);
+            try
+            {
+                if (ct.IsCancellationRequested || (_published.TryGetValue(snapshot.Uri, out var last) && last > snapshot.Version)) return;
+                _published[snapshot.Uri] = snapshot.Version;
+                await publish(new PublishDiagnosticsParams(snapshot.Uri, snapshot.Version, diagnostics));
+            }
+            finally
+            {
+                _publishing.Release();
+            }
         }
         catch (OperationCanceledException)
         {
