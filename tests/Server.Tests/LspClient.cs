@@ -55,7 +55,21 @@ public sealed class LspClient : IAsyncDisposable
             if (_latest.TryGetValue(uri, out var seen) && Match(seen)) return Task.FromResult(seen);
             var tcs = new TaskCompletionSource<PublishDiagnosticsParams>(TaskCreationOptions.RunContinuationsAsynchronously);
             _waiters.Add((Match, tcs));
-            return tcs.Task.WaitAsync(timeout ?? TimeSpan.FromSeconds(60));
+            return Describe(tcs.Task.WaitAsync(timeout ?? TimeSpan.FromSeconds(60)), uri, version);
+        }
+    }
+
+    /// <summary>On a timeout, says what was last published, so a failure can be read without a rerun.</summary>
+    private async Task<PublishDiagnosticsParams> Describe(Task<PublishDiagnosticsParams> wait, string uri, int? version)
+    {
+        try
+        {
+            return await wait;
+        }
+        catch (TimeoutException)
+        {
+            var last = _latest.TryGetValue(uri, out var p) ? $"version {p.Version?.ToString() ?? "none"} with {p.Diagnostics.Length} diagnostics" : "nothing";
+            throw new TimeoutException($"no diagnostics for {uri} version {version?.ToString() ?? "any"}; last published: {last}; server log: {string.Join(" | ", LogMessages)}");
         }
     }
 

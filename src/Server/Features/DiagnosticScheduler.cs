@@ -76,8 +76,9 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
         }
         finally
         {
+            // Not disposed: a newer Schedule may still call Cancel on it, and a source without a
+            // timer holds nothing that needs disposing.
             _pending.TryRemove(new KeyValuePair<string, CancellationTokenSource>(snapshot.Uri, cts));
-            cts.Dispose();
         }
     }
 }
