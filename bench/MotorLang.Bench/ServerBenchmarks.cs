@@ -22,6 +22,7 @@ public class ServerBenchmarks
     private int _version = 1;
     private int _opened;
     private Position _hover = new(0, 0);
+    private Position _lengthDigit = new(0, 0);
 
     [Params(10_000)]
     public int Motors { get; set; }
@@ -39,6 +40,8 @@ public class ServerBenchmarks
         var lines = _text.Split('\n');
         var wireLine = Array.FindIndex(lines, l => l.StartsWith("    wire ", StringComparison.Ordinal));
         _hover = new Position(wireLine, 6);
+        var lengthLine = Array.FindIndex(lines, l => l.StartsWith("    length ", StringComparison.Ordinal));
+        _lengthDigit = new Position(lengthLine, "    length ".Length);
     }
 
     [Benchmark]
@@ -51,13 +54,24 @@ public class ServerBenchmarks
         return p.Diagnostics.Length;
     }
 
-    /// <summary>Types one character into a description and waits for that version's diagnostics.</summary>
+    /// <summary>Types one character into a comment (the model cannot change) and waits for that version's diagnostics.</summary>
     [Benchmark]
-    public async Task<int> OneCharacterEditToDiagnostics()
+    public async Task<int> CommentEditToDiagnostics()
     {
         var version = ++_version;
         var at = new Position(0, 2);
         await _client.Change(Uri, version, new TextDocumentContentChangeEvent(new MotorLang.Server.Protocol.Range(at, at), "x"));
+        var p = await _client.DiagnosticsAsync(Uri, version, TimeSpan.FromMinutes(2));
+        return p.Diagnostics.Length;
+    }
+
+    /// <summary>Changes one digit of a motor's length (a value: the document is re-read and re-analysed) and waits for diagnostics.</summary>
+    [Benchmark]
+    public async Task<int> ValueEditToDiagnostics()
+    {
+        var version = ++_version;
+        var end = _lengthDigit with { Character = _lengthDigit.Character + 1 };
+        await _client.Change(Uri, version, new TextDocumentContentChangeEvent(new MotorLang.Server.Protocol.Range(_lengthDigit, end), (version % 9 + 1).ToString()));
         var p = await _client.DiagnosticsAsync(Uri, version, TimeSpan.FromMinutes(2));
         return p.Diagnostics.Length;
     }
