@@ -98,7 +98,7 @@ public static class Analyzer
             if (r.BranchDrop?.Value is not { } branch) continue;
             var upstream = feeders.GetValueOrDefault(r.Motor.Feeder)?.CumulativeDropPercent ?? 0;
             r.TotalDropPercent = upstream + branch.Percent;
-            var limit = Resolution.Settings.For(r.Motor).TotalDropLimit;
+            var limit = (r.Settings ?? Resolution.Settings.For(r.Motor)).TotalDropLimit;
             if (upstream > 0 && r.TotalDropPercent > limit)
                 findings.Add(new Finding(FindingCodes.VoltageDropHigh, Severity.Warning, r.Motor.Header.KeywordToken.Range,
                     $"total voltage drop to {r.Tag} is {r.TotalDropPercent:0.##} % (feeders {upstream:0.##} % + branch {branch.Percent:0.##} %), above the {Format.Percent(limit)} limit (NEC 215.2(A)(2) Informational Note No. 2)"));

@@ -38,6 +38,9 @@ public sealed class MotorResult(MotorNode motor)
     public Result<CurrentRange>? LockedRotorFromCodeLetter { get; internal set; }
     public Result<decimal>? LockedRotorTableMaximum { get; internal set; }
 
+    /// <summary>The installation settings the motor was sized with.</summary>
+    internal Resolution.Settings? Settings { get; set; }
+
     /// <summary>The current this motor adds to its feeder under 430.24 (its duty-cycle current when it has one).</summary>
     public decimal? DutyCycleAmps { get; internal set; }
 }

@@ -34,6 +34,7 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
         if (motor.Power is not { } power || feeder.Voltage is not { } systemVolts || feeder.Phases is not { } systemPhases) return r;
 
         var settings = motor.Like is null && !Settings.HasOwn(motor) ? FeederSettings(feeder) : Settings.For(motor);
+        r.Settings = settings;
         var ratedVolts = motor.RatedVoltage?.Value.Value ?? systemVolts.Value.Value;
         var phases = motor.Phases?.Value ?? systemPhases.Value;
         r.Volts = systemVolts.Value.Value;

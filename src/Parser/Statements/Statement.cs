@@ -27,7 +27,16 @@ public sealed class Statement
 
     public ImmutableArray<Argument> Args { get; }
 
-    public Argument? Arg(string name) => Args.FirstOrDefault(a => a.Spec.Name == name);
+    /// <summary>The argument filling the named position. A loop, not LINQ: analysis calls this for every attribute of every motor.</summary>
+    public Argument? Arg(string name)
+    {
+        foreach (var a in Args)
+        {
+            if (a.Spec.Name == name) return a;
+        }
+
+        return null;
+    }
 
     /// <summary>The range from the keyword to the last token (comment excluded).</summary>
     public SourceRange Range => SourceRange.Cover(KeywordToken.Range, Line.Tokens[^1].Range);
