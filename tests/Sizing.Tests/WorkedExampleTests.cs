@@ -147,6 +147,18 @@ public class WorkedExampleTests
         Assert.Equal(2.66m, Math.Round(r.Value.Value.Percent, 2));
     }
 
+    // Starting drop. Hand calculation: 15 hp 480 V design B, Table 430.251(B) 116 A, 100 ft of 10 AWG Cu in EMT (R 1.2,
+    // XL 0.063 ohm/1000 ft), starting PF 0.35 (common practice, no source; sin = 0.9367): Ze = 0.42 + 0.0590 = 0.4790;
+    // 1.732 x 116 x 0.4790 x 0.1 = 9.62 V = 2.0 % of 480 V.
+    [Fact]
+    public void StartingVoltageDrop()
+    {
+        var r = VoltageDrop.Starting(116m, 100m, WireSpec.Single(ConductorSize.Parse("10")), 480m, Phases.Three, ConductorMaterial.Copper, RacewayType.Emt);
+        Assert.Equal(9.62m, Math.Round(r.Value!.Value.Volts, 2));
+        Assert.Equal(2.0m, Math.Round(r.Value.Value.Percent, 1));
+        Assert.Contains(r.Steps, s => s.Label == "Starting voltage drop");
+    }
+
     // Single-phase doubles the one-way length: hand calculation, 12 AWG Cu in PVC (R 2.0, XL 0.054), PF 1.0:
     // Ze = 2.0; 2 x 16 A x 2.0 x 100 ft / 1000 = 6.4 V = 2.67 % of 240 V.
     [Fact]

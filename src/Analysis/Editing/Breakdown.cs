@@ -79,7 +79,7 @@ public static class Breakdown
         if (m.Disconnect is { } d) yield return new BreakdownSection("Disconnecting means", d.Steps);
         if (m.Controller is { } c) yield return new BreakdownSection("Controller", c.Steps.Concat(m.NemaStarter?.Steps ?? []).ToList());
         if (m.BranchDrop is { } vd)
-            yield return new BreakdownSection("Voltage drop", vd.Steps,
+            yield return new BreakdownSection("Voltage drop", vd.Steps.Concat(m.StartingDrop?.Steps ?? []).ToList(),
                 m.TotalDropPercent is { } total ? $"feeders and branch together: {total:0.##} %" : null);
         if (m.MinimumConduit is { } conduit)
             yield return new BreakdownSection("Conduit", conduit.Steps,

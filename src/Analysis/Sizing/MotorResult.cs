@@ -33,6 +33,7 @@ public sealed class MotorResult(MotorNode motor)
     public Result<ConductorSize>? MinimumGround { get; internal set; }
     public Result<Drop>? BranchDrop { get; internal set; }
     public decimal? TotalDropPercent { get; internal set; }
+    public Result<Drop>? StartingDrop { get; internal set; }
     public Result<TradeSize>? MinimumConduit { get; internal set; }
     public decimal? ConduitFillPercent { get; internal set; }
     public Result<CurrentRange>? LockedRotorFromCodeLetter { get; internal set; }

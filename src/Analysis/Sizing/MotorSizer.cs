@@ -82,9 +82,9 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
         CheckOverload(motor, r);
         CheckDisconnectAndController(motor, r, flc);
         CheckGround(motor, r, flc, phases, kind, design, efficiency, settings);
+        LockedRotor(motor, r, phases, design);
         CheckVoltageDrop(motor, r, flc, settings);
         CheckConduit(motor, r, phases, settings);
-        LockedRotor(motor, r, phases, design);
         return r;
     }
 
@@ -287,6 +287,10 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
         var wire = r.Wire ?? r.MinimumWire?.Value;
         if (length is null || wire is null) return;
         r.BranchDrop = VoltageDrop.Of(flc, Conversions.Feet(length.Value), wire.Value, r.Volts, r.Phases, settings.Material, settings.Raceway, settings.PowerFactor);
+        // Starting drop at the largest locked-rotor current known: the code letter's upper end, else the table maximum.
+        var lockedRotor = r.LockedRotorFromCodeLetter?.Value is { } range ? range.Maximum ?? range.Minimum : r.LockedRotorTableMaximum?.Value;
+        if (lockedRotor is { } lra)
+            r.StartingDrop = VoltageDrop.Starting(lra, Conversions.Feet(length.Value), wire.Value, r.Volts, r.Phases, settings.Material, settings.Raceway);
         if (r.BranchDrop.Value is { } drop && drop.Percent > settings.BranchDropLimit)
             Add(FindingCodes.VoltageDropHigh, Severity.Warning, (Get(motor, m => m.Wire) ?? null)?.Range ?? motor.Header.KeywordToken.Range,
                 $"branch voltage drop {drop.Percent:0.##} % is above the {Format.Percent(settings.BranchDropLimit)} limit (NEC 210.19 Informational Note No. 4)");

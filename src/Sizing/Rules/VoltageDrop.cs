@@ -29,7 +29,7 @@ public static class VoltageDrop
             var row8 = CodeTables.RowFor(CodeTables.DcResistance, wire.Size)!;
             ze = CsvTable.Number(row8[CodeTables.DcResistance.Column(material == ConductorMaterial.Copper ? "r_cu" : "r_al")])!.Value;
             rule = "NEC Chapter 9 Table 8";
-            how = $"dc resistance {Format.Number(ze)} Ω/1000 ft";
+            how = $"dc resistance {ze:0.#####} Ω/1000 ft";
         }
         else
         {
@@ -43,7 +43,7 @@ public static class VoltageDrop
             var sin = (decimal)Math.Sqrt(1 - (double)(powerFactor * powerFactor));
             ze = r.Value * powerFactor + x.Value * sin;
             rule = "NEC Chapter 9 Table 9, note 2";
-            how = $"R {Format.Number(r.Value)} × {Format.Number(powerFactor)} + X {Format.Number(x.Value)} × {sin:0.###} = {ze:0.####} Ω/1000 ft";
+            how = $"R {r.Value:0.####} × {Format.Number(powerFactor)} + X {x.Value:0.####} × {sin:0.###} = {ze:0.####} Ω/1000 ft";
         }
 
         var factor = phases == Phases.Three ? Sqrt3 : 2m;
@@ -57,4 +57,19 @@ public static class VoltageDrop
 
     /// <summary>Power factor assumed at locked rotor for starting drop: common practice, no source.</summary>
     public const decimal StartingPowerFactor = 0.35m;
+
+    /// <summary>
+    /// The drop while the motor starts: the same calculation at locked-rotor current and the low
+    /// power factor of a stalled motor. Informational, like the running drop.
+    /// </summary>
+    public static Result<Drop> Starting(decimal lockedRotorAmps, decimal lengthFeet, WireSpec wire, decimal volts, Phases phases,
+        ConductorMaterial material, RacewayType raceway)
+    {
+        var r = Of(lockedRotorAmps, lengthFeet, wire, volts, phases, material, raceway, StartingPowerFactor);
+        if (r.Value is not { } drop) return r;
+        return Result<Drop>.Of(drop,
+            new Step("Starting power factor", Format.Number(StartingPowerFactor), "common practice, no source", "a motor at locked rotor draws mostly reactive current"),
+            r.Steps[0],
+            r.Steps[1] with { Label = "Starting voltage drop" });
+    }
 }
