@@ -236,6 +236,10 @@ public sealed class LanguageServerTarget
     public DocumentTextResult? DocumentText(TextDocumentIdentifier p) =>
         _store.Get(p.Uri) is { } s ? new DocumentTextResult(s.Version, s.Text) : null;
 
+    /// <summary>Debug request: the managed heap after a full collection, in bytes, for memory measurements.</summary>
+    [JsonRpcMethod("motorlang/heapBytes")]
+    public long HeapBytes() => GC.GetTotalMemory(forceFullCollection: true);
+
     // ---- helpers ----
 
     /// <summary>Runs a read off the reader thread on the current snapshot; ContentModified if the document moved on meanwhile.</summary>

@@ -12,12 +12,40 @@ public sealed record Step(string Label, string Value, string Rule, string Note)
     public static Step Amps(string label, decimal amps, string rule, string note) => new(label, Format.Amps(amps), rule, note);
 }
 
-/// <summary>A computed value with the steps that led to it, or the reason it could not be computed.</summary>
-public sealed record Result<T>(T? Value, ImmutableArray<Step> Steps, string? Unavailable = null) where T : struct
+/// <summary>
+/// A computed value with the steps that led to it, or the reason it could not be computed. Steps
+/// may be deferred: a value computed for every motor but explained only on hover builds its
+/// explanation when first asked, which keeps a large list's memory down.
+/// </summary>
+public sealed class Result<T> where T : struct
 {
+    private readonly Lazy<ImmutableArray<Step>> _steps;
+
+    public Result(T? value, ImmutableArray<Step> steps, string? unavailable = null)
+    {
+        Value = value;
+        Unavailable = unavailable;
+        _steps = new Lazy<ImmutableArray<Step>>(steps);
+    }
+
+    private Result(T value, Func<ImmutableArray<Step>> steps)
+    {
+        Value = value;
+        _steps = new Lazy<ImmutableArray<Step>>(steps, LazyThreadSafetyMode.PublicationOnly);
+    }
+
+    public T? Value { get; }
+
+    public ImmutableArray<Step> Steps => _steps.Value;
+
+    public string? Unavailable { get; }
+
     public bool HasValue => Value is not null;
 
     public static Result<T> Of(T value, params Step[] steps) => new(value, [.. steps]);
+
+    /// <summary>A value whose steps are written only when someone reads them.</summary>
+    public static Result<T> Deferred(T value, Func<ImmutableArray<Step>> steps) => new(value, steps);
 
     public static Result<T> Missing(string why, params Step[] steps) => new(null, [.. steps], why);
 }

@@ -21,38 +21,43 @@ public static class VoltageDrop
     public static Result<Drop> Of(decimal amps, decimal lengthFeet, WireSpec wire, decimal volts, Phases phases,
         ConductorMaterial material, RacewayType raceway, decimal powerFactor)
     {
-        string rule;
-        decimal ze;
-        string how;
+        decimal ze, r = 0, x = 0, sin = 0;
         if (phases == Phases.Dc)
         {
             var row8 = CodeTables.RowFor(CodeTables.DcResistance, wire.Size)!;
             ze = CsvTable.Number(row8[CodeTables.DcResistance.Column(material == ConductorMaterial.Copper ? "r_cu" : "r_al")])!.Value;
-            rule = "NEC Chapter 9 Table 8";
-            how = $"dc resistance {ze:0.#####} Ω/1000 ft";
         }
         else
         {
             var t = CodeTables.Impedance;
             var row = CodeTables.RowFor(t, wire.Size);
             var conduit = raceway == RacewayType.Pvc ? "pvc" : "steel";
-            var r = row is null ? null : CsvTable.Number(row[t.Column($"r_{(material == ConductorMaterial.Copper ? "cu" : "al")}_{conduit}")]);
-            var x = row is null ? null : CsvTable.Number(row[t.Column(raceway == RacewayType.Pvc ? "xl_pvc" : "xl_steel")]);
-            if (r is null || x is null)
+            var resistance = row is null ? null : CsvTable.Number(row[t.Column($"r_{(material == ConductorMaterial.Copper ? "cu" : "al")}_{conduit}")]);
+            var reactance = row is null ? null : CsvTable.Number(row[t.Column(raceway == RacewayType.Pvc ? "xl_pvc" : "xl_steel")]);
+            if (resistance is null || reactance is null)
                 return Result<Drop>.Missing($"Chapter 9 Table 9 has no {wire.Size} row for this conductor");
-            var sin = (decimal)Math.Sqrt(1 - (double)(powerFactor * powerFactor));
-            ze = r.Value * powerFactor + x.Value * sin;
-            rule = "NEC Chapter 9 Table 9, note 2";
-            how = $"R {r.Value:0.####} × {Format.Number(powerFactor)} + X {x.Value:0.####} × {sin:0.###} = {ze:0.####} Ω/1000 ft";
+            (r, x) = (resistance.Value, reactance.Value);
+            sin = (decimal)Math.Sqrt(1 - (double)(powerFactor * powerFactor));
+            ze = r * powerFactor + x * sin;
         }
 
         var factor = phases == Phases.Three ? Sqrt3 : 2m;
         var dropVolts = factor * amps * ze * lengthFeet / 1000m / wire.Sets;
-        var percent = dropVolts / volts * 100m;
-        return Result<Drop>.Of(new Drop(dropVolts, percent),
-            new Step("Effective impedance", $"{ze:0.####} Ω/1000 ft", rule, how),
-            new Step("Voltage drop", $"{Format.Number(dropVolts)} V ({percent:0.##} %)", rule,
-                $"{(phases == Phases.Three ? "√3" : "2")} × {Format.Amps(amps)} × Ze × {Format.Number(lengthFeet)} ft ÷ 1000{(wire.Sets > 1 ? $" ÷ {wire.Sets} sets" : "")}"));
+        var drop = new Drop(dropVolts, dropVolts / volts * 100m);
+        // Every motor gets a drop; only a hover reads how it was found, so the text waits until then.
+        return Result<Drop>.Deferred(drop, () =>
+        {
+            var rule = phases == Phases.Dc ? "NEC Chapter 9 Table 8" : "NEC Chapter 9 Table 9, note 2";
+            var how = phases == Phases.Dc
+                ? $"dc resistance {ze:0.#####} Ω/1000 ft"
+                : $"R {r:0.####} × {Format.Number(powerFactor)} + X {x:0.####} × {sin:0.###} = {ze:0.####} Ω/1000 ft";
+            return
+            [
+                new Step("Effective impedance", $"{ze:0.####} Ω/1000 ft", rule, how),
+                new Step("Voltage drop", $"{Format.Number(drop.Volts)} V ({drop.Percent:0.##} %)", rule,
+                    $"{(phases == Phases.Three ? "√3" : "2")} × {Format.Amps(amps)} × Ze × {Format.Number(lengthFeet)} ft ÷ 1000{(wire.Sets > 1 ? $" ÷ {wire.Sets} sets" : "")}"),
+            ];
+        });
     }
 
     /// <summary>Power factor assumed at locked rotor for starting drop: common practice, no source.</summary>
@@ -67,9 +72,11 @@ public static class VoltageDrop
     {
         var r = Of(lockedRotorAmps, lengthFeet, wire, volts, phases, material, raceway, StartingPowerFactor);
         if (r.Value is not { } drop) return r;
-        return Result<Drop>.Of(drop,
+        return Result<Drop>.Deferred(drop, () =>
+        [
             new Step("Starting power factor", Format.Number(StartingPowerFactor), "common practice, no source", "a motor at locked rotor draws mostly reactive current"),
             r.Steps[0],
-            r.Steps[1] with { Label = "Starting voltage drop" });
+            r.Steps[1] with { Label = "Starting voltage drop" },
+        ]);
     }
 }
