@@ -11,6 +11,9 @@ namespace MotorLang.Parser;
 /// <summary>The result of parsing one document: the lossless tree, the model and every diagnostic.</summary>
 public sealed record ParseResult(SyntaxTree Tree, MotorList Model, ImmutableArray<Diagnostic> Diagnostics)
 {
+    /// <summary>Set when this result was made by re-reading one line of an earlier one: what changed in the model.</summary>
+    public ModelEdit? Edit { get; init; }
+
     public bool HasErrors => Diagnostics.Any(d => d.Severity == Severity.Error);
 }
 
@@ -50,52 +53,12 @@ public static class DocumentParser
     }
 
     /// <summary>
-    /// After an edit that stayed inside one line, re-reads just that line when it was and still is
-    /// a comment or blank line: such an edit cannot change the model, so the model and diagnostics
-    /// are kept and only the tree gets the new line. Returns null when that does not hold, and the
-    /// caller parses the whole text.
+    /// After an edit that stayed inside line <paramref name="lineIndex"/>, re-reads just that line
+    /// when the edit cannot have changed the document's structure (see <see cref="LineReparser"/>).
+    /// Returns null when that does not hold, and the caller parses the whole text.
     /// </summary>
-    public static ParseResult? ReparseCommentLine(ParseResult previous, string newText, int lineIndex)
-    {
-        var lines = previous.Tree.Lines;
-        if (lineIndex < 0 || lineIndex >= lines.Length) return null;
-        var old = lines[lineIndex];
-        if (old.InConflict || old.Kind is not (LineKind.Comment or LineKind.Blank)) return null;
-        var hasBom = newText.Length > 0 && newText[0] == '\uFEFF';
-        if (hasBom != previous.Tree.HasBom || newText.Length > MaxChars || newText.AsSpan().IndexOf('\0') >= 0) return null;
-
-        // The edit must have kept every line break where it was: same count, and this line's bounds.
-        var start = hasBom ? 1 : 0;
-        var breaks = 0;
-        var lineStart = -1;
-        var lineEnd = -1;
-        for (var i = start; i <= newText.Length; i++)
-        {
-            if (breaks == lineIndex && lineStart < 0) lineStart = i;
-            if (i == newText.Length || newText[i] == '\n')
-            {
-                if (breaks == lineIndex) lineEnd = i;
-                if (i < newText.Length) breaks++;
-            }
-        }
-
-        if (breaks != lines.Length - 1 || lineStart < 0 || lineEnd < 0) return null;
-        var ending = lineEnd < newText.Length ? "\n" : "";
-        if (ending.Length > 0 && lineEnd > lineStart && newText[lineEnd - 1] == '\r')
-        {
-            ending = "\r\n";
-            lineEnd--;
-        }
-
-        if (ending != old.LineEnding) return null;
-        var content = newText[lineStart..lineEnd];
-        if (SyntaxLine.IsConflictMarker(content)) return null;
-        var diagnostics = new List<Diagnostic>();
-        var line = LineScanner.ScanSingle(lineIndex, content, ending, diagnostics);
-        if (line.Tokens.Length > 0 || diagnostics.Count > 0) return null;
-        var tree = new SyntaxTree(newText, hasBom, lines.SetItem(lineIndex, line), previous.Tree.Diagnostics);
-        return previous with { Tree = tree };
-    }
+    public static ParseResult? ReparseLine(ParseResult previous, string newText, int lineIndex) =>
+        LineReparser.Reparse(previous, newText, lineIndex);
 
     private static ParseResult Unreadable(string text, bool hasBom, List<Diagnostic> diagnostics)
     {

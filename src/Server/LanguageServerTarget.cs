@@ -185,6 +185,7 @@ public sealed class LanguageServerTarget
         if (!settings.InlayFlc && !settings.InlayWire) return [];
         return s.Analysis.Motors.Values
             .Where(m => m.Motor.Header.Line.Index >= p.Range.Start.Line && m.Motor.Header.Line.Index <= p.Range.End.Line)
+            .OrderBy(m => m.Motor.Header.Line.Index)
             .Select(m => (m, label: Breakdown.InlaySummary(m, settings.InlayFlc, settings.InlayWire)))
             .Where(x => x.label is not null)
             .Select(x => new InlayHint(new Position(x.m.Motor.Header.Line.Index, x.m.Motor.Header.Line.Length), x.label!, null, true))
@@ -195,7 +196,7 @@ public sealed class LanguageServerTarget
     public Task<CodeLens[]?> CodeLens(CodeLensParams p, CancellationToken ct) => Read(p.TextDocument.Uri, ct, s =>
         !_presentation.CodeLens
             ? []
-            : s.Analysis.Feeders.Values.Select(f => new CodeLens(Convert.ToLsp(f.Feeder.Header.Range),
+            : s.Analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index).Select(f => new CodeLens(Convert.ToLsp(f.Feeder.Header.Range),
                 new Command(Breakdown.FeederSummary(f), "motorlang.showSchedule", [p.TextDocument.Uri]))).ToArray());
 
     [JsonRpcMethod("textDocument/definition", UseSingleObjectParameterDeserialization = true)]

@@ -31,14 +31,14 @@ public sealed record Settings(
     /// <summary>True when the block writes any installation setting of its own.</summary>
     public static bool HasOwn(BlockNode block) => SettingKeywords.Any(block.Has);
 
-    public static Settings For(BlockNode block)
+    public static Settings For(BlockNode block, MotorList model)
     {
         var chain = new List<BlockNode>();
         for (BlockNode? b = block; b is not null; b = b.Parent) chain.Add(b);
         if (block is MotorNode motor)
         {
             // A motor written "like" another takes that motor's own settings before its feeder's.
-            chain.InsertRange(1, LikeChain(motor));
+            chain.InsertRange(1, Likes.Chain(motor, model).Skip(1));
         }
 
         T Pick<T>(Func<BlockNode, Located<T>?> get, T fallback)
@@ -65,6 +65,4 @@ public sealed record Settings(
             Pick(b => b.TotalDropLimit, new Quantity(d.TotalDropLimit, Unit.Percent)).Value,
             Pick(b => b.PowerFactor, d.PowerFactor));
     }
-
-    private static IEnumerable<BlockNode> LikeChain(MotorNode motor) => Likes.Chain(motor).Skip(1);
 }

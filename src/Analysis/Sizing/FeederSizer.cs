@@ -24,7 +24,7 @@ internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode
         if (feeder.Voltage is not { } volts || feeder.Phases is not { } phases) return r;
         r.Volts = volts.Value.Value;
         r.Phases = phases.Value;
-        var settings = Settings.For(feeder);
+        var settings = Settings.For(feeder, model);
         var supplied = Downstream(feeder).ToList();
         var motorResults = supplied.SelectMany(f => f.Motors).Select(m => motors.GetValueOrDefault(m)).OfType<MotorResult>().ToList();
         if (motorResults.Any(m => !m.FullLoadCurrent.HasValue))
@@ -58,7 +58,7 @@ internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode
             var f = r.Feeder;
             var wire = r.Wire ?? r.MinimumWire?.Value;
             if (f.Length is not { } length || wire is null || r.CalculatedLoad == 0) continue;
-            var settings = Settings.For(f);
+            var settings = Settings.For(f, model);
             r.Drop = VoltageDrop.Of(r.CalculatedLoad, Conversions.Feet(length.Value), wire.Value, r.Volts, r.Phases, settings.Material, settings.Raceway, settings.PowerFactor);
         }
 

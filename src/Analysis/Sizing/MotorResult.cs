@@ -1,3 +1,4 @@
+using MotorLang.Analysis.Findings;
 using MotorLang.Parser.Model;
 using MotorLang.Sizing;
 using MotorLang.Sizing.Domain;
@@ -8,7 +9,21 @@ namespace MotorLang.Analysis.Sizing;
 /// <summary>Everything computed for one motor, each value with its steps. Null where it could not be computed.</summary>
 public sealed class MotorResult(MotorNode motor)
 {
-    public MotorNode Motor { get; } = motor;
+    public MotorNode Motor { get; private set; } = motor;
+
+    /// <summary>The findings sizing this motor produced (kept with it so that an update can replace just these).</summary>
+    internal Finding[] Findings { get; set; } = [];
+
+    /// <summary>
+    /// The same result for the copy of this motor in a newer model (its feeder was copied by an
+    /// edit elsewhere in it). A copy, never the original, so an older analysis is never changed.
+    /// </summary>
+    internal MotorResult Rebind(MotorNode copy)
+    {
+        var r = (MotorResult)MemberwiseClone();
+        r.Motor = copy;
+        return r;
+    }
     public string Tag => Motor.Tag?.Value ?? "";
     public decimal Horsepower { get; internal set; }
     public decimal Volts { get; internal set; }

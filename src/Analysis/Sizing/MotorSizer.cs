@@ -14,7 +14,7 @@ using MotorLang.Sizing.Tables;
 namespace MotorLang.Analysis.Sizing;
 
 /// <summary>Sizes one motor circuit with the sizing core and reports what the motor list gets wrong or leaves out.</summary>
-internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, SizingCache cache)
+internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Finding> findings, SizingCache cache)
 {
     /// <summary>Findings about values a motor inherits through 'like', with the motor they are written on.</summary>
     public List<(Finding Finding, MotorNode Owner)> Inherited { get; } = [];
@@ -23,7 +23,7 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
 
     private Settings FeederSettings(FeederNode feeder)
     {
-        if (!_feederSettings.TryGetValue(feeder, out var s)) _feederSettings[feeder] = s = Settings.For(feeder);
+        if (!_feederSettings.TryGetValue(feeder, out var s)) _feederSettings[feeder] = s = Settings.For(feeder, model);
         return s;
     }
 
@@ -33,7 +33,7 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
         var feeder = motor.Feeder;
         if (motor.Power is not { } power || feeder.Voltage is not { } systemVolts || feeder.Phases is not { } systemPhases) return r;
 
-        var settings = motor.Like is null && !Settings.HasOwn(motor) ? FeederSettings(feeder) : Settings.For(motor);
+        var settings = motor.Like is null && !Settings.HasOwn(motor) ? FeederSettings(feeder) : Settings.For(motor, model);
         r.Settings = settings;
         var ratedVolts = motor.RatedVoltage?.Value.Value ?? systemVolts.Value.Value;
         var phases = motor.Phases?.Value ?? systemPhases.Value;
@@ -153,7 +153,7 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
         var rating = Get(motor, m => m.ProtectionRating, out var ratingOwner);
         r.Device = device?.Value ?? ProtectiveDevice.InverseTimeBreaker;
         r.ProtectionRating = rating?.Value.Value;
-        var hardStart = Likes.Has(motor, m => m.HardStart);
+        var hardStart = Likes.Has(motor, model, m => m.HardStart);
         r.MaximumProtection = cache.MaximumProtection(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency, hardStart));
         if (r.MaximumProtection.Value is not { } max) return;
         var deviceName = ShortCircuitProtection.DeviceName(r.Device);
@@ -320,11 +320,11 @@ internal sealed class MotorSizer(EditBuilder edits, List<Finding> findings, Sizi
         r.LockedRotorTableMaximum = cache.LockedRotorMaximum(r.Horsepower, r.Volts, phases, design ?? DesignLetter.B);
     }
 
-    private static Located<T>? Get<T>(MotorNode motor, Func<MotorNode, Located<T>?> get) => Likes.Get(motor, get)?.Value;
+    private Located<T>? Get<T>(MotorNode motor, Func<MotorNode, Located<T>?> get) => Likes.Get(motor, model, get)?.Value;
 
-    private static Located<T>? Get<T>(MotorNode motor, Func<MotorNode, Located<T>?> get, out MotorNode? owner)
+    private Located<T>? Get<T>(MotorNode motor, Func<MotorNode, Located<T>?> get, out MotorNode? owner)
     {
-        var found = Likes.Get(motor, get);
+        var found = Likes.Get(motor, model, get);
         owner = found?.Owner;
         return found?.Value;
     }

@@ -65,6 +65,18 @@ public abstract class BlockNode
         return null;
     }
 
+    /// <summary>
+    /// Gives a fresh node (for a new version of the model) this block's statements and extents,
+    /// with <paramref name="old"/> swapped for <paramref name="replacement"/> where it appears.
+    /// </summary>
+    internal void CopyTo(BlockNode copy, Statement old, Statement replacement)
+    {
+        foreach (var s in _statements) copy._statements.Add(ReferenceEquals(s, old) ? replacement : s);
+        copy.LastLine = LastLine;
+        copy.LastOwnLine = LastOwnLine;
+        copy.ChildIndent = ChildIndent;
+    }
+
     /// <summary>An argument of the header or of one of this block's statements.</summary>
     public Located<T>? Get<T>(string keyword, string arg)
     {
@@ -121,8 +133,6 @@ public sealed class FeederNode(Statement header, ProjectNode? project) : Circuit
 
     public override string Keyword => "feeder";
 
-    /// <summary>The document's model, for resolving tags; set once the whole document is read.</summary>
-    public MotorList? Model { get; internal set; }
     public Located<Quantity>? Voltage => Get<Quantity>("feeder", "voltage");
     public Located<Phases>? Phases => Get<Phases>("feeder", "phases");
     public Located<string>? From => Get<string>("from", "source");

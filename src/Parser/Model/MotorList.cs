@@ -10,7 +10,6 @@ public sealed class MotorList
         Project = project;
         Feeders = feeders;
         _byTag = byTag;
-        foreach (var f in feeders) f.Model = this;
     }
 
     public ProjectNode? Project { get; }
@@ -20,6 +19,53 @@ public sealed class MotorList
     public IEnumerable<MotorNode> Motors => Feeders.SelectMany(f => f.Motors);
 
     public IEnumerable<LoadNode> Loads => Feeders.SelectMany(f => f.Loads);
+
+    /// <summary>
+    /// This model with one feeder (and everything in it) replaced by a copy; every other node is
+    /// shared, which is safe because nodes are never changed once the model is built.
+    /// </summary>
+    internal MotorList WithFeeder(FeederNode old, FeederNode replacement, IReadOnlyDictionary<CircuitNode, CircuitNode> copies)
+    {
+        var feeders = Feeders.ToArray();
+        feeders[Array.IndexOf(feeders, old)] = replacement;
+        var byTag = new Dictionary<string, CircuitNode>(_byTag, StringComparer.OrdinalIgnoreCase);
+        foreach (var (was, now) in copies)
+        {
+            // Only where the tag was registered to this node: a duplicate tag stays with its first user.
+            if (was.Tag is { } tag && byTag.TryGetValue(tag.Value, out var registered) && ReferenceEquals(registered, was)) byTag[tag.Value] = now;
+        }
+
+        return new MotorList(Project, feeders, byTag);
+    }
+
+    /// <summary>The innermost block whose lines include <paramref name="line"/>, found by binary search over the ordered blocks.</summary>
+    public BlockNode? BlockAt(int line)
+    {
+        if (Project is { } p && line >= p.Header.Line.Index && line <= p.LastLine) return p;
+        var feeder = Find(Feeders, line);
+        if (feeder is null) return null;
+        return (BlockNode?)Find(feeder.Motors, line) ?? (BlockNode?)Find(feeder.Loads, line) ?? feeder;
+    }
+
+    private static T? Find<T>(IReadOnlyList<T> blocks, int line) where T : BlockNode
+    {
+        int lo = 0, hi = blocks.Count - 1, found = -1;
+        while (lo <= hi)
+        {
+            var mid = (lo + hi) / 2;
+            if (blocks[mid].Header.Line.Index <= line)
+            {
+                found = mid;
+                lo = mid + 1;
+            }
+            else
+            {
+                hi = mid - 1;
+            }
+        }
+
+        return found >= 0 && line <= blocks[found].LastLine ? blocks[found] : null;
+    }
 
     /// <summary>Finds a feeder, motor or load by tag; tags compare without regard to case.</summary>
     public CircuitNode? Find(string tag) => _byTag.GetValueOrDefault(tag);

@@ -18,9 +18,10 @@ public sealed class DocumentSnapshot
 
     /// <summary>
     /// A snapshot after an edit inside line <paramref name="editedLine"/> of <paramref name="previous"/>:
-    /// when that line was and stays a comment or blank line, the previous model and analysis are
-    /// reused, since such an edit cannot change them. Only an already-analyzed previous snapshot is
-    /// used, so snapshots never form a chain that keeps old texts alive.
+    /// when the edit cannot change the document's structure, only that line is re-read and only
+    /// what it can affect is analysed again (<see cref="DocumentParser.ReparseLine"/>,
+    /// <see cref="Analyzer.Update"/>). Only an already-analyzed previous snapshot is used, so
+    /// snapshots never form a chain that keeps old texts alive.
     /// </summary>
     public DocumentSnapshot(string uri, int version, string text, DocumentSnapshot? previous, int? editedLine)
     {
@@ -29,10 +30,10 @@ public sealed class DocumentSnapshot
         Text = text;
         var before = previous is not null && editedLine is not null && previous._analysis.IsValueCreated ? previous._analysis.Value : null;
         _parse = new Lazy<ParseResult>(
-            () => (before is not null ? DocumentParser.ReparseCommentLine(before.Parse, text, editedLine!.Value) : null) ?? DocumentParser.Parse(text),
+            () => (before is not null ? DocumentParser.ReparseLine(before.Parse, text, editedLine!.Value) : null) ?? DocumentParser.Parse(text),
             LazyThreadSafetyMode.ExecutionAndPublication);
         _analysis = new Lazy<AnalysisResult>(
-            () => (before is not null ? Analyzer.Reuse(before, _parse.Value) : null) ?? Analyzer.Analyze(_parse.Value),
+            () => (before is not null ? Analyzer.Update(before, _parse.Value) : null) ?? Analyzer.Analyze(_parse.Value),
             LazyThreadSafetyMode.ExecutionAndPublication);
     }
 

@@ -1,0 +1,60 @@
+using System.Collections.Immutable;
+using MotorLang.Analysis.Findings;
+using MotorLang.Analysis.Fixes;
+using MotorLang.Analysis.Sizing;
+using MotorLang.Parser;
+using MotorLang.Parser.Diagnostics;
+using MotorLang.Parser.Model;
+using MotorLang.Parser.Text;
+
+namespace MotorLang.Analysis;
+
+/// <summary>The analysis of one document: per-motor and per-feeder results, and every finding in line order.</summary>
+public sealed class AnalysisResult
+{
+    private readonly Dictionary<MotorNode, MotorResult> _motors;
+
+    internal AnalysisResult(ParseResult parse, Dictionary<MotorNode, MotorResult> motors, IReadOnlyDictionary<FeederNode, FeederResult> feeders,
+        IReadOnlyList<RankedFinding> ranked, ImmutableArray<Finding> parseFindings, IReadOnlyList<Finding> systemFindings, IReadOnlyList<MotorNode> likeUsers)
+    {
+        Ranked = ranked;
+        var findings = ImmutableArray.CreateBuilder<Finding>(ranked.Count);
+        foreach (var r in ranked) findings.Add(r.Finding);
+        Parse = parse;
+        _motors = motors;
+        Feeders = feeders;
+        Findings = findings.MoveToImmutable();
+        ParseFindings = parseFindings;
+        SystemFindings = systemFindings;
+        LikeUsers = likeUsers;
+    }
+
+    public ParseResult Parse { get; }
+    public IReadOnlyDictionary<MotorNode, MotorResult> Motors => _motors;
+    public IReadOnlyDictionary<FeederNode, FeederResult> Feeders { get; }
+
+    /// <summary>Syntax diagnostics and sizing findings together, ordered by position.</summary>
+    public ImmutableArray<Finding> Findings { get; }
+
+    public bool HasErrors => Findings.Any(f => f.Severity == Severity.Error);
+
+    // The parts Findings is made of, kept so that an update after a one-line edit replaces only
+    // the parts the edit can have changed.
+    internal Dictionary<MotorNode, MotorResult> MotorTable => _motors;
+
+    /// <summary><see cref="Findings"/> with their ranks, for merging in an update.</summary>
+    internal IReadOnlyList<RankedFinding> Ranked { get; }
+
+    /// <summary>The parser's diagnostics as findings, in line order.</summary>
+    internal ImmutableArray<Finding> ParseFindings { get; }
+
+    /// <summary>Findings that depend on many motors at once: feeders and total voltage drops.</summary>
+    internal IReadOnlyList<Finding> SystemFindings { get; }
+
+    /// <summary>Motors written 'like' another, whose results depend on that other motor's statements.</summary>
+    internal IReadOnlyList<MotorNode> LikeUsers { get; }
+
+    /// <summary>Every fix at once ("size everything"): edits that do not overlap, joined into one change.</summary>
+    public ImmutableArray<TextEdit> SizeEverything() =>
+        EditBuilder.Combine(Findings.Where(f => f.Fix is not null).SelectMany(f => f.Fix!.Edits));
+}

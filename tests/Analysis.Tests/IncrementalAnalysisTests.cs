@@ -1,0 +1,199 @@
+using System.Text;
+using CsCheck;
+using MotorLang.Analysis.Reports;
+using MotorLang.Parser;
+
+namespace MotorLang.Analysis.Tests;
+
+/// <summary>
+/// An update after a one-line edit (re-read line, re-sized motors) must equal a fresh analysis of
+/// the new text: the same findings in the same order, with the same fixes, and the same schedule.
+/// </summary>
+public class IncrementalAnalysisTests
+{
+    /// <summary>Invented for the test: 'like' chains across feeders, a feeder fed from another, loads and long runs, so drops add up.</summary>
+    private const string Plant = """
+        project "Incremental test plant"
+          ambient 40C
+          conductor cu THHN 75C
+
+        feeder SW-1 "Main switchboard" 480V 3ph
+          length 200ft
+          wire 4/0 AWG
+          protection inverse-time-breaker 400A
+
+          motor C-1 "Compressor" 50hp
+            nameplate 62A
+            service-factor 1.15
+            length 400ft
+            wire 4 AWG
+            protection inverse-time-breaker 150A
+            overload 70A
+
+        feeder MCC-2 "Process MCC" 480V 3ph
+          from SW-1
+          length 300ft
+          wire 1/0 AWG
+          protection dual-element-fuse 150A
+          load L-1 "Heater" 20A continuous
+
+          motor P-1 "Feed pump" 15hp
+            design B
+            code-letter G
+            length 500ft
+            wire 12 AWG
+            protection inverse-time-breaker 70A
+            overload 22A
+
+          motor P-2 "Standby pump" 15hp
+            like P-1
+            length 250ft
+
+          motor P-3 "Booster" 10hp
+            like P-2
+            wire 10 AWG
+
+        feeder MCC-3 "Utility MCC" 480V 3ph
+          wire 6 AWG
+
+          motor F-1 "Fan" 7.5hp
+            like P-1
+            ground 14 AWG
+        """;
+
+    private static readonly string[] Documents =
+    [
+        Plant,
+        .. Directory.GetFiles(Path.Combine(RepoRoot, "examples"), "*.motors").Order().Select(File.ReadAllText),
+    ];
+
+    private static readonly Gen<string> Inserted = Gen.OneOfConst(
+        "", "1", "0", "5", "9", "x", " ", "  ", "hp", "A", "AWG", "kcmil", "ft", "\"", "#", "😀", "°", "B", "1/0", "-", "2x ", "kW", "V", "fuse", "M-1");
+
+    /// <summary>A line (as a fraction of the line count), a start and length within it (fractions), and the text put there.</summary>
+    private static readonly Gen<(int Document, (double Line, double Start, double Length, string Text)[] Edits)> Sessions =
+        Gen.Select(Gen.Int[0, Documents.Length - 1], Gen.Select(Gen.Double[0, 1], Gen.Double[0, 1], Gen.Double[0, 0.5], Inserted).Array[1, 12]);
+
+    [Fact]
+    public void UpdatesEqualAFreshAnalysisAfterRandomOneLineEdits()
+    {
+        var incremental = 0;
+        var steps = 0;
+        Sessions.Sample(session =>
+        {
+            var text = Documents[session.Document];
+            var analysis = Analyzer.Analyze(text);
+            foreach (var (linePick, startPick, lengthPick, insert) in session.Edits)
+            {
+                var (newText, line) = EditOneLine(text, linePick, startPick, lengthPick, insert);
+                var reread = DocumentParser.ReparseLine(analysis.Parse, newText, line);
+                var updated = reread is null ? null : Analyzer.Update(analysis, reread);
+                analysis = updated ?? Analyzer.Analyze(newText);
+                text = newText;
+                Interlocked.Increment(ref steps);
+                if (updated is null) continue;
+                Interlocked.Increment(ref incremental);
+                Assert.Equal(text, analysis.Parse.Tree.Print());
+                var expected = Describe(Analyzer.Analyze(text));
+                var actual = Describe(analysis);
+                if (expected != actual && Environment.GetEnvironmentVariable("DUMP") is { } dump)
+                    File.WriteAllText(dump, $"line {line}: {text.Split('\n')[line]}\n---\n{text}\n---\n{expected}\n---\n{actual}");
+                Assert.Equal(expected, actual);
+            }
+        }, iter: 300);
+
+        // The generator must reach the incremental path often enough for the comparison to mean something.
+        Assert.True(incremental > steps / 8, $"only {incremental} of {steps} edits were applied incrementally");
+    }
+
+    [Fact]
+    public void EditingAMotorValueResizesItAndTheMotorsLikeIt()
+    {
+        var before = Analyzer.Analyze(Plant);
+        var (text, line) = Replace(Plant, "    wire 12 AWG", "    wire 10 AWG");
+        var reread = DocumentParser.ReparseLine(before.Parse, text, line);
+        Assert.NotNull(reread);
+        var after = Analyzer.Update(before, reread!);
+        Assert.NotNull(after);
+        Assert.Equal(Describe(Analyzer.Analyze(text)), Describe(after!));
+        // Motors in untouched feeders keep their very results, except those that inherit the edited wire.
+        var c1 = before.Motors.Single(m => m.Key.Tag?.Value == "C-1");
+        Assert.Same(c1.Value, after!.Motors[c1.Key]);
+        var f1 = after.Motors.Single(m => m.Key.Tag?.Value == "F-1");
+        Assert.NotSame(before.Motors.Single(m => m.Key.Tag?.Value == "F-1").Value, f1.Value);
+    }
+
+    [Fact]
+    public void AnUpdateNeverChangesThePreviousAnalysis()
+    {
+        var before = Analyzer.Analyze(Plant);
+        var snapshot = Describe(before);
+        var (text, line) = Replace(Plant, "  length 200ft", "  length 900ft");   // every motor's total drop moves
+        var after = Analyzer.Update(before, DocumentParser.ReparseLine(before.Parse, text, line)!);
+        Assert.NotNull(after);
+        Assert.NotEqual(snapshot, Describe(after!));
+        Assert.Equal(snapshot, Describe(before));
+    }
+
+    [Fact]
+    public void AnAnalysisOfAnotherDocumentIsNotUpdated()
+    {
+        var before = Analyzer.Analyze(Plant);
+        var (text, line) = Replace(Plant, "    wire 12 AWG", "    wire 10 AWG");
+        var unrelated = Analyzer.Analyze(Plant);
+        var reread = DocumentParser.ReparseLine(before.Parse, text, line)!;
+        Assert.Null(Analyzer.Update(unrelated, reread));
+    }
+
+    private static (string Text, int Line) Replace(string text, string oldLine, string newLine)
+    {
+        var lines = text.Split('\n');
+        var index = Array.IndexOf(lines, oldLine);
+        Assert.True(index >= 0, $"no line '{oldLine}'");
+        lines[index] = newLine;
+        return (string.Join('\n', lines), index);
+    }
+
+    /// <summary>Replaces part of one line's content (never its ending) and says which line.</summary>
+    private static (string Text, int Line) EditOneLine(string text, double linePick, double startPick, double lengthPick, string insert)
+    {
+        var lines = text.Split('\n');
+        var index = Math.Min(lines.Length - 1, (int)(linePick * lines.Length));
+        var content = lines[index];
+        var contentLength = content.EndsWith('\r') ? content.Length - 1 : content.Length;
+        var start = (int)(startPick * contentLength);
+        var end = Math.Min(contentLength, start + (int)(lengthPick * contentLength));
+        // Never split a surrogate pair: an editor never produces such a range.
+        while (start > 0 && start < contentLength && char.IsLowSurrogate(content[start])) start--;
+        while (end < contentLength && char.IsLowSurrogate(content[end])) end++;
+        lines[index] = content[..start] + insert + content[end..];
+        return (string.Join('\n', lines), index);
+    }
+
+    /// <summary>Everything an analysis reports, as text: findings with fixes, then the schedule.</summary>
+    private static string Describe(AnalysisResult a)
+    {
+        var sb = new StringBuilder();
+        foreach (var f in a.Findings)
+        {
+            sb.Append($"{f.Code} {f.Severity} {f.Range} {f.Message}");
+            if (f.Fix is { } fix) sb.Append($" | {fix.Title}: {string.Join("; ", fix.Edits.Select(e => $"{e.Range} '{e.NewText}'"))}");
+            sb.Append('\n');
+        }
+
+        var schedule = Schedule.Of(a);
+        foreach (var row in schedule.Rows) sb.AppendJoin(" | ", row.Cells).Append('\n');
+        foreach (var feeder in schedule.Feeders) sb.Append(feeder).Append('\n');
+        return sb.ToString();
+    }
+
+    private static string RepoRoot
+    {
+        get
+        {
+            var dir = AppContext.BaseDirectory;
+            while (!File.Exists(Path.Combine(dir, "MotorLang.sln"))) dir = Path.GetDirectoryName(dir)!;
+            return dir;
+        }
+    }
+}
