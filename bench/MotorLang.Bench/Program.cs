@@ -12,6 +12,12 @@ switch (args)
     case ["time", var n]:
         QuickTiming.Run(int.Parse(n));
         break;
+    case ["updates", var n]:
+        QuickTiming.Updates(int.Parse(n));
+        break;
+    case ["edits", var n]:
+        await QuickTiming.ServerEdits(int.Parse(n));
+        break;
     case ["memory", var n]:
         await QuickTiming.ServerMemory(int.Parse(n));
         break;

@@ -20,7 +20,13 @@ public static class QuickTiming
             var pause = GC.GetTotalPauseDuration();
             var parsed = Stage("parse", () => DocumentParser.Parse(text));
             Stage("format", () => Formatter.Format(parsed));
-            Stage("analyze", () => Analyzer.Analyze(parsed));
+            var analysis = Stage("analyze", () => Analyzer.Analyze(parsed));
+            var lines = text.Split('\n');
+            var line = Array.FindIndex(lines, l => l.StartsWith("    length ", StringComparison.Ordinal));
+            lines[line] = lines[line].Replace("length 9", "length 8").Replace("length 1", "length 2");
+            var edited = string.Join('\n', lines);
+            var reread = Stage("re-read one line", () => DocumentParser.ReparseLine(parsed, edited, line)!);
+            Stage("update", () => Analyzer.Update(analysis, reread)!);
             Console.WriteLine($"  gc pause {(GC.GetTotalPauseDuration() - pause).TotalMilliseconds:0} ms");
         }
     }
@@ -41,6 +47,94 @@ public static class QuickTiming
                           $"total {(text.Length * 2 + m2 - m0) >> 20} MB ({analysis.Findings.Length} findings)");
         GC.KeepAlive(analysis);
         return Task.CompletedTask;
+    }
+
+    /// <summary>`updates N`: 200 one-line value edits through the parser and analysis alone (no server), timed each.</summary>
+    public static void Updates(int motors)
+    {
+        var text = MotorListGenerator.Generate(motors);
+        var analysis = Analyzer.Analyze(text);
+        var lines = text.Split('\n');
+        var lengthLines = Enumerable.Range(0, lines.Length).Where(i => lines[i].StartsWith("    length ", StringComparison.Ordinal)).ToArray();
+        var times = new List<double>();
+        var bytes = GC.GetAllocatedBytesForCurrentThread();
+        var pause = GC.GetTotalPauseDuration();
+        for (var i = 0; i < 200; i++)
+        {
+            var line = lengthLines[i * 37 % lengthLines.Length];
+            lines[line] = "    length " + (i % 9 + 1) + lines[line]["    length ".Length..][1..];
+            var edited = string.Join('\n', lines);
+            var sw = Stopwatch.StartNew();
+            var reread = DocumentParser.ReparseLine(analysis.Parse, edited, line) ?? throw new InvalidOperationException("not incremental");
+            analysis = Analyzer.Update(analysis, reread) ?? throw new InvalidOperationException("no update");
+            times.Add(sw.Elapsed.TotalMilliseconds);
+        }
+
+        times.Sort();
+        Console.WriteLine($"re-read + update: p50 {times[99]:0.00} ms, p95 {times[189]:0.00} ms, max {times[^1]:0.00} ms, " +
+                          $"{(GC.GetAllocatedBytesForCurrentThread() - bytes) / 200 / 1024} KiB per edit (text included), gc pause {(GC.GetTotalPauseDuration() - pause).TotalMilliseconds:0} ms");
+    }
+
+    /// <summary>
+    /// `edits N`: the in-process server on an N-motor list, debounce zero; 300 one-character value
+    /// edits, each timed from sending the change to receiving its diagnostics, as percentiles.
+    /// </summary>
+    public static async Task ServerEdits(int motors)
+    {
+        var (serverSide, clientSide) = Nerdbank.Streams.FullDuplexStream.CreatePair();
+        var server = MotorLang.Server.LanguageServer.RunAsync(serverSide, serverSide, TextWriter.Null, TimeSpan.Zero);
+        var client = new MotorLang.Server.Tests.LspClient(clientSide, clientSide);
+        await client.InitializeAsync();
+        var text = MotorListGenerator.Generate(motors);
+        const string uri = "file:///bench/edits.motors";
+        await client.Open(uri, text);
+        await client.DiagnosticsAsync(uri, 1, TimeSpan.FromMinutes(2));
+        var lines = text.Split('\n');
+        var lengthLines = Enumerable.Range(0, lines.Length).Where(i => lines[i].StartsWith("    length ", StringComparison.Ordinal)).ToArray();
+        var times = new List<double>();
+        var slowest = new List<(double Ms, double Gc)>();
+        var faults = MinorFaults();
+        var pause = GC.GetTotalPauseDuration();
+        for (var version = 2; version < 302; version++)
+        {
+            var line = lengthLines[version * 37 % lengthLines.Length];
+            var at = new MotorLang.Server.Protocol.Position(line, "    length ".Length);
+            var change = new MotorLang.Server.Protocol.TextDocumentContentChangeEvent(
+                new MotorLang.Server.Protocol.Range(at, at with { Character = at.Character + 1 }), (version % 9 + 1).ToString());
+            var gcBefore = GC.GetTotalPauseDuration();
+            var sw = Stopwatch.StartNew();
+            await client.Change(uri, version, change);
+            await client.DiagnosticsAsync(uri, version, TimeSpan.FromMinutes(2));
+            times.Add(sw.Elapsed.TotalMilliseconds);
+            slowest.Add((sw.Elapsed.TotalMilliseconds, (GC.GetTotalPauseDuration() - gcBefore).TotalMilliseconds));
+        }
+
+        if (Environment.GetEnvironmentVariable("SHOW_SLOWEST") is not null)
+            Console.WriteLine($"page faults during the edits: {MinorFaults() - faults}; resident set now {Environment.WorkingSet >> 20} MB");
+        if (Environment.GetEnvironmentVariable("SHOW_SLOWEST") is not null)
+            Console.WriteLine("slowest (ms, of which gc): " + string.Join(", ", slowest.Select((x, i) => (x, i)).OrderByDescending(p => p.x.Ms).Take(20).Select(p => $"#{p.i} {p.x.Ms:0.0}/{p.x.Gc:0.0}")));
+
+        times.Sort();
+        double P(double q) => times[(int)Math.Min(times.Count - 1, Math.Ceiling(q * times.Count) - 1)];
+        Console.WriteLine($"{motors} motors, 300 value edits → diagnostics: p50 {P(0.5):0.0} ms, p95 {P(0.95):0.0} ms, max {times[^1]:0.0} ms; " +
+                          $"gc pause {(GC.GetTotalPauseDuration() - pause).TotalMilliseconds:0} ms in all");
+        await client.Request<object?>("shutdown", null);
+        await client.Notify("exit");
+        await server;
+    }
+
+    /// <summary>Minor page faults of this process so far (Linux; 0 elsewhere).</summary>
+    private static long MinorFaults()
+    {
+        try
+        {
+            var stat = File.ReadAllText("/proc/self/stat");
+            return long.Parse(stat[(stat.LastIndexOf(')') + 2)..].Split(' ')[7]);
+        }
+        catch (IOException)
+        {
+            return 0;
+        }
     }
 
     private static T Stage<T>(string name, Func<T> work)

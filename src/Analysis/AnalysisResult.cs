@@ -15,7 +15,7 @@ public sealed class AnalysisResult
     private readonly Dictionary<MotorNode, MotorResult> _motors;
 
     internal AnalysisResult(ParseResult parse, Dictionary<MotorNode, MotorResult> motors, IReadOnlyDictionary<FeederNode, FeederResult> feeders,
-        IReadOnlyList<RankedFinding> ranked, ImmutableArray<Finding> parseFindings, IReadOnlyList<Finding> systemFindings, IReadOnlyList<MotorNode> likeUsers)
+        IReadOnlyList<RankedFinding> ranked, ImmutableArray<Finding> parseFindings, IReadOnlyList<MotorNode> likeUsers)
     {
         Ranked = ranked;
         var findings = ImmutableArray.CreateBuilder<Finding>(ranked.Count);
@@ -25,7 +25,6 @@ public sealed class AnalysisResult
         Feeders = feeders;
         Findings = findings.MoveToImmutable();
         ParseFindings = parseFindings;
-        SystemFindings = systemFindings;
         LikeUsers = likeUsers;
     }
 
@@ -48,11 +47,15 @@ public sealed class AnalysisResult
     /// <summary>The parser's diagnostics as findings, in line order.</summary>
     internal ImmutableArray<Finding> ParseFindings { get; }
 
-    /// <summary>Findings that depend on many motors at once: feeders and total voltage drops.</summary>
-    internal IReadOnlyList<Finding> SystemFindings { get; }
-
     /// <summary>Motors written 'like' another, whose results depend on that other motor's statements.</summary>
     internal IReadOnlyList<MotorNode> LikeUsers { get; }
+
+    private SizingCache? _cache;
+
+    /// <summary>Hands the sizing cache to the one update that continues from this analysis; later callers get null.</summary>
+    internal SizingCache? TakeCache() => Interlocked.Exchange(ref _cache, null);
+
+    internal void KeepCache(SizingCache cache) => _cache = cache.Count <= SizingCache.Limit ? cache : null;
 
     /// <summary>Every fix at once ("size everything"): edits that do not overlap, joined into one change.</summary>
     public ImmutableArray<TextEdit> SizeEverything() =>

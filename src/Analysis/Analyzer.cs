@@ -29,22 +29,24 @@ public static class Analyzer
         }
 
         run.ShareInheritedFixes(motors);
-        var (feeders, system) = run.SizeFeeders(motors, shared: null);
+        var feeders = run.SizeFeeders(motors, previous: null, affected: null, sharedMotor: null);
         var parseFindings = parse.Diagnostics.Select(Finding.From).ToImmutableArray();
         var all = new List<RankedFinding>();
         AddParseFindings(all, parseFindings);
         foreach (var r in motors.Values) AddMotorFindings(all, r);
-        AddSystemFindings(all, system);
+        foreach (var r in feeders.Values) AddFeederFindings(all, r);
         all.Sort(FindingOrder.Instance);
-        return new AnalysisResult(parse, motors, feeders, all, parseFindings, system, likeUsers);
+        var result = new AnalysisResult(parse, motors, feeders, all, parseFindings, likeUsers);
+        result.KeepCache(run.Cache);
+        return result;
     }
 
     /// <summary>
     /// The analysis of a document re-read after a one-line edit (<see cref="ParseResult.Edit"/>),
-    /// made from the previous analysis: only the motors the edit can affect are sized again (the
-    /// edited motor, the motors written 'like' it, or every motor of an edited feeder); results of
-    /// the others are kept, and feeders, which depend on all their motors, are sized again (there
-    /// are few of them). Null when <paramref name="parse"/> is not such a re-read of
+    /// made from the previous analysis: only what the edit can affect is sized again — the edited
+    /// motor and the motors written 'like' it (or every motor of an edited feeder), the feeders
+    /// they are on and the feeders those are supplied from; feeders further down only get their
+    /// drop from the source brought up to date. Everything else is kept. Null when <paramref name="parse"/> is not such a re-read of
     /// <paramref name="previous"/>'s document; then call <see cref="Analyze(ParseResult)"/>.
     /// The result equals a full analysis; tests check that on random edits.
     /// </summary>
@@ -63,12 +65,12 @@ public static class Analyzer
         foreach (var old in edit.OldFeeder.Motors)
         {
             var copy = (MotorNode)edit.Copies[old];
-            if (!motors.Remove(old, out var result)) continue;
-            if (resize.Contains(copy)) removed.UnionWith(result.Findings);
-            else owned.Add(motors[copy] = result.Rebind(copy));
+            if (!motors.Remove(old, out var earlier)) continue;
+            if (resize.Contains(copy)) removed.UnionWith(earlier.Findings);
+            else owned.Add(motors[copy] = earlier.Rebind(copy));
         }
 
-        var run = new Run(parse);
+        var run = new Run(parse, previous.TakeCache());
         var added = new List<RankedFinding>();
         foreach (var motor in resize)
         {
@@ -83,22 +85,40 @@ public static class Analyzer
             if (motors.TryGetValue(motor, out var r)) AddMotorFindings(added, r);
         }
 
-        var (feeders, system) = run.SizeFeeders(motors, shared: r => !owned.Contains(r));
-        removed.UnionWith(previous.SystemFindings);
-        AddSystemFindings(added, system);
+        var affected = FeedersToResize(edit, resize, run);
+        var feeders = run.SizeFeeders(motors, previous.Feeders, affected, sharedMotor: r => !owned.Contains(r));
+        foreach (var feeder in model.Feeders)
+        {
+            var now = feeders[feeder];
+            var before = previous.Feeders.GetValueOrDefault(ReferenceEquals(feeder, edit.NewFeeder) ? edit.OldFeeder : feeder);
+            if (ReferenceEquals(now, before)) continue;
+            if (before is not null)
+            {
+                removed.UnionWith(before.SizingFindings);
+                removed.UnionWith(before.DropFindings);
+            }
+
+            AddFeederFindings(added, now);
+        }
 
         var parseFindings = SpliceLine(previous.ParseFindings, parse.Diagnostics, edit.Line, removed, added);
         added.Sort(FindingOrder.Instance);
         var kept = previous.Ranked.Where(f => !removed.Contains(f.Finding)).ToList();
-        return new AnalysisResult(parse, motors, feeders, FindingOrder.Merge(kept, added), parseFindings, system, likeUsers);
+        var result = new AnalysisResult(parse, motors, feeders, FindingOrder.Merge(kept, added), parseFindings, likeUsers);
+        result.KeepCache(run.Cache);
+        return result;
     }
 
     /// <summary>
     /// The previous analysis for a re-read document whose model is the very same object (an edit
     /// inside a comment or blank line): every result and finding still holds.
     /// </summary>
-    private static AnalysisResult Reuse(AnalysisResult previous, ParseResult parse) =>
-        new(parse, previous.MotorTable, previous.Feeders, previous.Ranked, previous.ParseFindings, previous.SystemFindings, previous.LikeUsers);
+    private static AnalysisResult Reuse(AnalysisResult previous, ParseResult parse)
+    {
+        var result = new AnalysisResult(parse, previous.MotorTable, previous.Feeders, previous.Ranked, previous.ParseFindings, previous.LikeUsers);
+        if (previous.TakeCache() is { } cache) result.KeepCache(cache);
+        return result;
+    }
 
     /// <summary>Motors whose header is unreadable and that give no power are left out rather than reported twice.</summary>
     private static bool Sized(MotorNode motor) => !motor.Header.Line.IsBroken || motor.Power is not null;
@@ -125,6 +145,24 @@ public static class Analyzer
         }
 
         return resize;
+    }
+
+    /// <summary>
+    /// The edited feeder, the feeders of the re-sized motors, and every feeder those are supplied
+    /// from (their loads include the motors further down).
+    /// </summary>
+    private static HashSet<FeederNode> FeedersToResize(ModelEdit edit, HashSet<MotorNode> resize, Run run)
+    {
+        var affected = new HashSet<FeederNode> { edit.NewFeeder };
+        foreach (var motor in resize) affected.Add(motor.Feeder);
+        foreach (var feeder in affected.ToList())
+        {
+            for (var up = run.Supplier(feeder); up is not null && affected.Add(up); up = run.Supplier(up))
+            {
+            }
+        }
+
+        return affected;
     }
 
     /// <summary>The parse findings with the edited line's replaced; the replaced ones go to <paramref name="removed"/>, the new ones to <paramref name="added"/>.</summary>
@@ -163,19 +201,24 @@ public static class Analyzer
         for (var i = 0; i < r.Findings.Length; i++) into.Add(new RankedFinding(r.Findings[i], RankedFinding.MotorRank(r.Motor.Header.Line.Index, i)));
     }
 
-    private static void AddSystemFindings(List<RankedFinding> into, List<Finding> system)
+    private static void AddFeederFindings(List<RankedFinding> into, FeederResult r)
     {
-        for (var i = 0; i < system.Count; i++) into.Add(new RankedFinding(system[i], RankedFinding.SystemRank(i)));
+        var line = r.Feeder.Header.Line.Index;
+        for (var i = 0; i < r.SizingFindings.Length; i++) into.Add(new RankedFinding(r.SizingFindings[i], RankedFinding.FeederRank(line, i)));
+        for (var i = 0; i < r.DropFindings.Length; i++)
+            into.Add(new RankedFinding(r.DropFindings[i], RankedFinding.FeederRank(line, r.SizingFindings.Length + i)));
     }
 
     /// <summary>One pass of sizing over a parse: the shared pieces the motor and feeder sizers need.</summary>
-    private sealed class Run(ParseResult parse)
+    private sealed class Run(ParseResult parse, SizingCache? cache = null)
     {
         private readonly EditBuilder _edits = new(parse.Tree);
-        private readonly SizingCache _cache = new();
+        private readonly SizingCache _cache = cache ?? new SizingCache();
         private readonly List<Finding> _scratch = [];
         private readonly List<(Finding Finding, MotorNode Owner, MotorNode Motor)> _inherited = [];
         private MotorSizer? _motorSizer;
+
+        public SizingCache Cache => _cache;
 
         private MotorSizer MotorSizer => _motorSizer ??= new MotorSizer(parse.Model, _edits, _scratch, _cache);
 
@@ -209,50 +252,76 @@ public static class Analyzer
             _inherited.Clear();
         }
 
+        public FeederNode? Supplier(FeederNode feeder) => Sizing.FeederSizer.Supplier(feeder, parse.Model);
+
         /// <summary>
-        /// Sizes every feeder, then voltage drops from the source to each motor. A motor result that
-        /// <paramref name="shared"/> says belongs to an earlier analysis is copied before its total drop changes.
+        /// Sizes the feeders in <paramref name="affected"/> (all when null) and keeps the others'
+        /// results from <paramref name="previous"/>; then brings every feeder's drop from the source
+        /// up to date and, on each feeder sized or whose drop moved, each motor's total drop. A
+        /// result that belongs to an earlier analysis is copied before it is changed.
         /// </summary>
-        public (Dictionary<FeederNode, FeederResult> Feeders, List<Finding> Findings) SizeFeeders(
-            Dictionary<MotorNode, MotorResult> motors, Func<MotorResult, bool>? shared)
+        public Dictionary<FeederNode, FeederResult> SizeFeeders(Dictionary<MotorNode, MotorResult> motors,
+            IReadOnlyDictionary<FeederNode, FeederResult>? previous, HashSet<FeederNode>? affected, Func<MotorResult, bool>? sharedMotor)
         {
-            var findings = new List<Finding>();
             var model = parse.Model;
-            var feederSizer = new FeederSizer(model, motors, _edits, findings, _cache);
-            var feeders = new Dictionary<FeederNode, FeederResult>();
+            var sizer = new FeederSizer(model, motors, _edits, _scratch, _cache);
+            var feeders = new Dictionary<FeederNode, FeederResult>(model.Feeders.Count);
+            var fresh = new HashSet<FeederResult>(ReferenceEqualityComparer.Instance);
             foreach (var feeder in model.Feeders)
             {
-                feeders[feeder] = Guard(() => feederSizer.Size(feeder), feeder.Header.KeywordToken.Range, findings) ?? new FeederResult(feeder);
-            }
-
-            feederSizer.Drops(feeders);
-            TotalDrops(model, motors, feeders, findings, shared);
-            return (feeders, findings);
-        }
-
-        private static void TotalDrops(MotorList model, Dictionary<MotorNode, MotorResult> motors, Dictionary<FeederNode, FeederResult> feeders,
-            List<Finding> findings, Func<MotorResult, bool>? shared)
-        {
-            List<MotorResult>? copies = null;
-            foreach (var r in motors.Values)
-            {
-                if (r.BranchDrop?.Value is not { } branch) continue;
-                var upstream = feeders.GetValueOrDefault(r.Motor.Feeder)?.CumulativeDropPercent ?? 0;
-                var total = upstream + branch.Percent;
-                var current = r;
-                if (r.TotalDropPercent != total)
+                if (affected is not null && !affected.Contains(feeder) && previous?.GetValueOrDefault(feeder) is { } kept)
                 {
-                    if (shared?.Invoke(r) == true) (copies ??= []).Add(current = r.Rebind(r.Motor));
-                    current.TotalDropPercent = total;
+                    feeders[feeder] = kept;
+                    continue;
                 }
 
-                var limit = (r.Settings ?? Settings.For(r.Motor, model)).TotalDropLimit;
+                _scratch.Clear();
+                var r = Guard(() => sizer.Size(feeder), feeder.Header.KeywordToken.Range, _scratch) ?? new FeederResult(feeder);
+                r.SizingFindings = [.. _scratch];
+                feeders[feeder] = r;
+                fresh.Add(r);
+            }
+
+            foreach (var feeder in model.Feeders)
+            {
+                var r = feeders[feeder];
+                var total = sizer.CumulativeDrop(feeder, feeders);
+                if (r.CumulativeDropPercent == total && !fresh.Contains(r)) continue;
+                if (!fresh.Contains(r)) fresh.Add(feeders[feeder] = r = r.Copy());
+                r.CumulativeDropPercent = total;
+            }
+
+            foreach (var feeder in model.Feeders)
+            {
+                if (feeders[feeder] is var r && fresh.Contains(r)) r.DropFindings = TotalDrops(model, feeder, r, motors, sharedMotor);
+            }
+
+            return feeders;
+        }
+
+        /// <summary>Each motor's drop from the source (its feeder's plus its branch) against the total limit.</summary>
+        private static Finding[] TotalDrops(MotorList model, FeederNode feeder, FeederResult fr, Dictionary<MotorNode, MotorResult> motors,
+            Func<MotorResult, bool>? sharedMotor)
+        {
+            List<Finding>? findings = null;
+            var upstream = fr.CumulativeDropPercent ?? 0;
+            foreach (var motor in feeder.Motors)
+            {
+                if (motors.GetValueOrDefault(motor) is not { } r || r.BranchDrop?.Value is not { } branch) continue;
+                var total = upstream + branch.Percent;
+                if (r.TotalDropPercent != total)
+                {
+                    if (sharedMotor?.Invoke(r) == true) motors[motor] = r = r.Rebind(motor);
+                    r.TotalDropPercent = total;
+                }
+
+                var limit = (r.Settings ?? Settings.For(motor, model)).TotalDropLimit;
                 if (upstream > 0 && total > limit)
-                    findings.Add(new Finding(FindingCodes.VoltageDropHigh, Severity.Warning, r.Motor.Header.KeywordToken.Range,
+                    (findings ??= []).Add(new Finding(FindingCodes.VoltageDropHigh, Severity.Warning, motor.Header.KeywordToken.Range,
                         $"total voltage drop to {r.Tag} is {total:0.##} % (feeders {upstream:0.##} % + branch {branch.Percent:0.##} %), above the {Format.Percent(limit)} limit (NEC 215.2(A)(2) Informational Note No. 2)"));
             }
 
-            foreach (var c in copies ?? []) motors[c.Motor] = c;
+            return findings?.ToArray() ?? [];
         }
 
         /// <summary>A defect in one motor's sizing becomes a finding on that motor, never a crash of the whole analysis.</summary>

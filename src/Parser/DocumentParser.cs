@@ -60,6 +60,13 @@ public static class DocumentParser
     public static ParseResult? ReparseLine(ParseResult previous, string newText, int lineIndex) =>
         LineReparser.Reparse(previous, newText, lineIndex);
 
+    /// <summary>
+    /// The same, given just the edited line's new content (without its ending): for an editor that
+    /// knows which line it changed, so a large document's text need not be rebuilt on every key.
+    /// </summary>
+    public static ParseResult? ReparseLine(ParseResult previous, int lineIndex, string newContent) =>
+        LineReparser.Reparse(previous, lineIndex, newContent);
+
     private static ParseResult Unreadable(string text, bool hasBom, List<Diagnostic> diagnostics)
     {
         // Keep the text as one opaque line so printing the tree still gives the input back.

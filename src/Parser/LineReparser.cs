@@ -3,6 +3,7 @@ using MotorLang.Parser.Diagnostics;
 using MotorLang.Parser.Model;
 using MotorLang.Parser.Statements;
 using MotorLang.Parser.Syntax;
+using MotorLang.Parser.Text;
 using MotorLang.Parser.Values;
 
 namespace MotorLang.Parser;
@@ -22,13 +23,38 @@ namespace MotorLang.Parser;
 /// </summary>
 internal static class LineReparser
 {
+    /// <summary>Longest line re-read on its own; anything longer is left to a full parse, which also checks the document's size.</summary>
+    private const int MaxLineChars = 1 << 20;
+
     public static ParseResult? Reparse(ParseResult previous, string newText, int lineIndex)
     {
+        if (lineIndex < 0 || lineIndex >= previous.Tree.Lines.Length) return null;
+        if (ReadLine(previous.Tree, newText, lineIndex) is not var (content, _)) return null;
+        return Reparse(previous, lineIndex, content, newText);
+    }
+
+    /// <summary>
+    /// Re-reads line <paramref name="lineIndex"/> with <paramref name="content"/> in place of its
+    /// content (its ending stays). The new text is not needed: the tree joins it when asked.
+    /// </summary>
+    public static ParseResult? Reparse(ParseResult previous, int lineIndex, string content)
+    {
         var tree = previous.Tree;
-        if (lineIndex < 0 || lineIndex >= tree.Lines.Length) return null;
+        if (lineIndex < 0 || lineIndex >= tree.Lines.Length || content.Length > MaxLineChars) return null;
+        var ending = tree.Lines[lineIndex].LineEnding;
+        // A line break or NUL inside, a '\r' that would join the ending, or a BOM that would become the document's changes more than this line.
+        if (content.AsSpan().IndexOfAny('\n', '\0') >= 0 || (content.EndsWith('\r') && ending == "\n")) return null;
+        if (lineIndex == 0 && !tree.HasBom && content.StartsWith('\uFEFF')) return null;
+        if (SyntaxLine.IsConflictMarker(content)) return null;
+        return Reparse(previous, lineIndex, content, null);
+    }
+
+    private static ParseResult? Reparse(ParseResult previous, int lineIndex, string content, string? newText)
+    {
+        var tree = previous.Tree;
         var old = tree.Lines[lineIndex];
         if (old.InConflict || old.Kind == LineKind.ConflictMarker) return null;
-        if (ReadLine(tree, newText, lineIndex) is not var (content, ending)) return null;
+        var ending = old.LineEnding;
 
         var diagnostics = new List<Diagnostic>();
         var line = LineScanner.ScanSingle(lineIndex, content, ending, diagnostics);
@@ -50,8 +76,10 @@ internal static class LineReparser
         var hasBom = newText.Length > 0 && newText[0] == '\uFEFF';
         if (hasBom != tree.HasBom || newText.Length > DocumentParser.MaxChars) return null;
         var oldText = tree.Text;
-        var start = hasBom ? 1 : 0;
-        for (var i = 0; i < lineIndex; i++) start += tree.Lines[i].Length + tree.Lines[i].LineEnding.Length;
+        // Found in the text rather than by adding up the lengths of the lines before it: reading
+        // tens of thousands of line objects costs more than scanning the characters.
+        var start = LineStarts.Find(oldText, lineIndex, hasBom ? 1 : 0);
+        if (start < 0) return null;
         var old = tree.Lines[lineIndex];
         var oldEnd = start + old.Length;
         var newEnd = newText.Length - (oldText.Length - oldEnd);
@@ -66,7 +94,7 @@ internal static class LineReparser
         return (content.ToString(), old.LineEnding);
     }
 
-    private static ParseResult? ReparseStatement(ParseResult previous, string newText, SyntaxLine old, SyntaxLine line, List<Diagnostic> lineDiagnostics)
+    private static ParseResult? ReparseStatement(ParseResult previous, string? newText, SyntaxLine old, SyntaxLine line, List<Diagnostic> lineDiagnostics)
     {
         if (old.Statement is not { } oldStatement || line.Tokens.Length == 0) return null;
         if (line.IndentWidth != old.IndentWidth || line.IndentHasTab || old.IndentHasTab) return null;

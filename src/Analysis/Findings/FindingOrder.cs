@@ -2,7 +2,7 @@ namespace MotorLang.Analysis.Findings;
 
 /// <summary>
 /// A finding with its place among findings at the same position: where it came from (the
-/// parser's line, a motor's header line, or the feeder pass) and its index there. Findings are
+/// parser's line, a motor's or a feeder's header line) and its index there. Findings are
 /// reported by position, then code, then this rank, so that a full analysis and an update after an
 /// edit give the same order, and fixes inserted at one point keep the order the sizer wrote them.
 /// </summary>
@@ -12,7 +12,7 @@ internal readonly record struct RankedFinding(Finding Finding, long Rank)
 
     public static long MotorRank(int headerLine, int index) => (1L << 60) | ((long)headerLine << 20) | (uint)index;
 
-    public static long SystemRank(int index) => (2L << 60) | (uint)index;
+    public static long FeederRank(int headerLine, int index) => (2L << 60) | ((long)headerLine << 20) | (uint)index;
 }
 
 internal sealed class FindingOrder : IComparer<RankedFinding>

@@ -47,33 +47,35 @@ internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode
         CheckWire(feeder, r, required, settings);
         CheckProtection(feeder, r);
         CheckGround(feeder, r, settings);
+        Drop(r, settings);
         return r;
     }
 
-    /// <summary>Voltage drop along the feeder at its running load, then cumulative from the source.</summary>
-    public void Drops(IReadOnlyDictionary<FeederNode, FeederResult> feeders)
+    /// <summary>Voltage drop along the feeder at its running load (with its wire, or the minimum when none is given).</summary>
+    private void Drop(FeederResult r, Settings settings)
     {
-        foreach (var r in feeders.Values)
-        {
-            var f = r.Feeder;
-            var wire = r.Wire ?? r.MinimumWire?.Value;
-            if (f.Length is not { } length || wire is null || r.CalculatedLoad == 0) continue;
-            var settings = Settings.For(f, model);
-            r.Drop = VoltageDrop.Of(r.CalculatedLoad, Conversions.Feet(length.Value), wire.Value, r.Volts, r.Phases, settings.Material, settings.Raceway, settings.PowerFactor);
-        }
-
-        foreach (var r in feeders.Values)
-        {
-            decimal total = 0;
-            var seen = new HashSet<FeederNode>();
-            for (FeederNode? f = r.Feeder; f is not null && seen.Add(f); f = f.From is { } from ? model.Find(from.Value) as FeederNode : null)
-            {
-                total += feeders.GetValueOrDefault(f)?.Drop?.Value?.Percent ?? 0;
-            }
-
-            r.CumulativeDropPercent = total;
-        }
+        var wire = r.Wire ?? r.MinimumWire?.Value;
+        if (r.Feeder.Length is not { } length || wire is null || r.CalculatedLoad == 0) return;
+        r.Drop = VoltageDrop.Of(r.CalculatedLoad, Conversions.Feet(length.Value), wire.Value, r.Volts, r.Phases, settings.Material, settings.Raceway, settings.PowerFactor);
     }
+
+    /// <summary>Drop from the source to this feeder's load end: its own and that of each feeder it is supplied from.</summary>
+    public decimal CumulativeDrop(FeederNode feeder, IReadOnlyDictionary<FeederNode, FeederResult> feeders)
+    {
+        var own = feeders.GetValueOrDefault(feeder)?.Drop?.Value?.Percent ?? 0;
+        if (feeder.From is null) return own;
+        decimal total = 0;
+        var seen = new HashSet<FeederNode>();
+        for (FeederNode? f = feeder; f is not null && seen.Add(f); f = Supplier(f, model))
+        {
+            total += feeders.GetValueOrDefault(f)?.Drop?.Value?.Percent ?? 0;
+        }
+
+        return total;
+    }
+
+    /// <summary>The feeder this one is supplied from ('from'), if any.</summary>
+    public static FeederNode? Supplier(FeederNode feeder, MotorList model) => feeder.From is { } from ? model.Find(from.Value) as FeederNode : null;
 
     private void CheckWire(FeederNode feeder, FeederResult r, decimal required, Settings settings)
     {

@@ -65,6 +65,15 @@ public sealed class MotorResult(MotorNode motor)
 public sealed class FeederResult(FeederNode feeder)
 {
     public FeederNode Feeder { get; } = feeder;
+
+    /// <summary>The findings sizing this feeder produced.</summary>
+    internal Finding[] SizingFindings { get; set; } = [];
+
+    /// <summary>Total voltage-drop findings of the motors on this feeder, which depend on its drop from the source.</summary>
+    internal Finding[] DropFindings { get; set; } = [];
+
+    /// <summary>A copy to change, so that an older analysis holding this result never sees it change.</summary>
+    internal FeederResult Copy() => (FeederResult)MemberwiseClone();
     public string Tag => Feeder.Tag?.Value ?? "";
     public decimal Volts { get; internal set; }
     public Phases Phases { get; internal set; }

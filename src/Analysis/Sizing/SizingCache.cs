@@ -7,10 +7,18 @@ namespace MotorLang.Analysis.Sizing;
 /// <summary>
 /// Remembers sizing-core results for one analysis. A plant repeats the same ratings and settings
 /// on many motors, and the sizing functions are pure, so equal inputs share one result (and one
-/// set of steps). Lives only as long as one analysis, so it never grows without bound.
+/// set of steps). An update after an edit takes over its previous analysis's cache (only one
+/// analysis ever holds it, so it is never used by two threads); past <see cref="Limit"/> entries
+/// it is dropped and a fresh one started, so it never grows without bound.
 /// </summary>
 internal sealed class SizingCache
 {
+    public const int Limit = 200_000;
+
+    public int Count => _current.Count + _branch.Count + _minimum.Count + _allowable.Count + _protection.Count + _overload.Count + _ground.Count
+                        + _groundInstantaneous.Count + _conduit.Count + _disconnect.Count + _nema.Count + _controller.Count
+                        + _lockedRotorMax.Count + _codeLetter.Count;
+
     private readonly Dictionary<MotorRating, Result<decimal>> _current = [];
     private readonly Dictionary<BranchInput, Result<decimal>> _branch = [];
     private readonly Dictionary<(decimal, InstallationConditions, bool), Result<WireSpec>> _minimum = [];

@@ -1,21 +1,28 @@
 using System.Collections.Immutable;
 using MotorLang.Parser.Diagnostics;
+using MotorLang.Parser.Text;
 
 namespace MotorLang.Parser.Syntax;
 
 /// <summary>The lossless tree of a document: a BOM flag, then every line as written.</summary>
 public sealed class SyntaxTree
 {
-    internal SyntaxTree(string text, bool hasBom, ImmutableArray<SyntaxLine> lines, ImmutableArray<Diagnostic> diagnostics)
+    private string? _text;
+
+    /// <summary>A tree; <paramref name="text"/> may be null when the tree was made by re-reading one line, and is then joined from the lines when first asked for.</summary>
+    internal SyntaxTree(string? text, bool hasBom, ImmutableArray<SyntaxLine> lines, ImmutableArray<Diagnostic> diagnostics)
     {
-        Text = text;
+        _text = text;
         HasBom = hasBom;
         Lines = lines;
         Diagnostics = diagnostics;
     }
 
-    /// <summary>The source text exactly as given (including any BOM).</summary>
-    public string Text { get; }
+    /// <summary>
+    /// The source text exactly as given (including any BOM). After a one-line edit it is joined
+    /// from the lines on first use, so typing in a large document does not copy it on every key.
+    /// </summary>
+    public string Text => _text ??= Join();
 
     public bool HasBom { get; }
 
@@ -31,6 +38,33 @@ public sealed class SyntaxTree
         if (HasBom) sb.Append('\uFEFF');
         foreach (var line in Lines) sb.Append(line.Print());
         return sb.ToString();
+    }
+
+    /// <summary>The text with one line's content replaced (its ending kept).</summary>
+    public string WithLine(int line, string content)
+    {
+        var text = Text;
+        var start = LineStarts.Find(text, line, HasBom ? 1 : 0);
+        var end = start + Lines[line].Length;
+        return string.Concat(text.AsSpan(0, start), content, text.AsSpan(end));
+    }
+
+    private string Join()
+    {
+        var length = HasBom ? 1 : 0;
+        foreach (var line in Lines) length += line.Length + line.LineEnding.Length;
+        return string.Create(length, this, static (span, tree) =>
+        {
+            var at = 0;
+            if (tree.HasBom) span[at++] = '\uFEFF';
+            foreach (var line in tree.Lines)
+            {
+                line.ContentSpan.CopyTo(span[at..]);
+                at += line.Length;
+                line.LineEnding.CopyTo(span[at..]);
+                at += line.LineEnding.Length;
+            }
+        });
     }
 
     /// <summary>The line ending most used in the document, for inserting new lines.</summary>

@@ -25,13 +25,12 @@ public sealed class DocumentStore
         {
             if (!_documents.TryGetValue(uri, out var current)) return null;
             var list = changes as IReadOnlyList<TextDocumentContentChangeEvent> ?? changes.ToList();
-            return _documents[uri] = new DocumentSnapshot(uri, version, TextChanges.Apply(current.Text, list), current, SingleLine(list));
+            var next = list is [{ Range: { } r } c] && r.Start.Line == r.End.Line && c.Text.AsSpan().IndexOfAny('\n', '\r') < 0
+                ? current.WithLineEdit(version, r.Start.Line, r.Start.Character, r.End.Character, c.Text)
+                : null;
+            return _documents[uri] = next ?? new DocumentSnapshot(uri, version, TextChanges.Apply(current.Text, list));
         }
     }
-
-    /// <summary>The line an edit stayed inside, when there is exactly one change and it neither removes nor adds a line break.</summary>
-    private static int? SingleLine(IReadOnlyList<TextDocumentContentChangeEvent> changes) =>
-        changes is [{ Range: { } r } c] && r.Start.Line == r.End.Line && c.Text.IndexOfAny(['\n', '\r']) < 0 ? r.Start.Line : null;
 
     public bool Close(string uri)
     {

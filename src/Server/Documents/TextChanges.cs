@@ -1,4 +1,4 @@
-using System.Text;
+using MotorLang.Parser.Text;
 using MotorLang.Server.Protocol;
 
 namespace MotorLang.Server.Documents;
@@ -18,8 +18,8 @@ public static class TextChanges
 
             var start = Offset(text, range.Start);
             var end = Math.Max(start, Offset(text, range.End));
-            text = new StringBuilder(text.Length - (end - start) + change.Text.Length)
-                .Append(text, 0, start).Append(change.Text).Append(text, end, text.Length - end).ToString();
+            // One allocation of the new text: a document can be megabytes, and this runs on every keystroke.
+            text = string.Concat(text.AsSpan(0, start), change.Text, text.AsSpan(end));
         }
 
         return text;
@@ -31,14 +31,8 @@ public static class TextChanges
     /// </summary>
     public static int Offset(string text, Position p)
     {
-        var offset = 0;
-        for (var line = 0; line < p.Line; line++)
-        {
-            var nl = text.IndexOf('\n', offset);
-            if (nl < 0) return text.Length;
-            offset = nl + 1;
-        }
-
+        var offset = LineStarts.Find(text, p.Line);
+        if (offset < 0) return text.Length;
         var lineEnd = text.IndexOf('\n', offset);
         if (lineEnd < 0) lineEnd = text.Length;
         else if (lineEnd > offset && text[lineEnd - 1] == '\r') lineEnd--;
