@@ -29,6 +29,9 @@ public sealed class LanguageServerTarget
     private PresentationSettings _presentation = new();
     private bool _shutdown;
 
+    /// <summary>Whether the client asks for a code action's edit only when the user picks it (codeAction/resolve).</summary>
+    private bool _resolvesEdits;
+
     internal LanguageServerTarget(JsonRpc rpc, ServerLog log, TimeSpan debounce)
     {
         _log = log;
@@ -46,6 +49,7 @@ public sealed class LanguageServerTarget
     {
         _workspace.SetRoot(p.RootUri);
         _presentation = PresentationSettings.From(p.InitializationOptions);
+        _resolvesEdits = ClientCapabilities.ResolvesCodeActionEdits(p.Capabilities);
         if (p.ProcessId is { } pid) WatchClient(pid);
         _log.Info($"initialize from {p.ClientInfo?.Name ?? "unknown client"} (process {p.ProcessId?.ToString() ?? "none"})");
         var version = typeof(LanguageServerTarget).Assembly.GetName().Version?.ToString() ?? "0";
@@ -54,7 +58,7 @@ public sealed class LanguageServerTarget
             TextDocumentSync: new TextDocumentSyncOptions(OpenClose: true, Change: 2, Save: new SaveOptions(false)),
             HoverProvider: true,
             CompletionProvider: new CompletionOptions([" "], false),
-            CodeActionProvider: new CodeActionOptions(["quickfix", "source.fixAll"]),
+            CodeActionProvider: new CodeActionOptions(["quickfix", "source.fixAll"], ResolveProvider: true),
             DocumentFormattingProvider: true,
             DocumentRangeFormattingProvider: true,
             DocumentSymbolProvider: true,
@@ -147,12 +151,34 @@ public sealed class LanguageServerTarget
 
         if (Allowed("source.fixAll") && s.Analysis.Findings.Any(f => f.Fix is not null))
         {
-            var sized = SizeAll.Apply(s.Text);
-            if (sized != s.Text) actions.Add(new CodeAction("Size everything: write every required size", "source.fixAll", null, null, Edit(uri, [WholeDocument(s, sized)])));
+            // Sizing everything re-analyses the document a few times: a client that can resolve
+            // actions gets the edit only when the user picks this one, not on every cursor move.
+            if (_resolvesEdits) actions.Add(new CodeAction(SizeEverythingTitle, "source.fixAll", null, null, null, new CodeActionData(uri, s.Version)));
+            else if (SizeEverything(s) is { } action) actions.Add(action);
         }
 
         return actions.ToArray();
     });
+
+    [JsonRpcMethod("codeAction/resolve", UseSingleObjectParameterDeserialization = true)]
+    public Task<CodeAction?> ResolveCodeAction(CodeAction action, CancellationToken ct)
+    {
+        if (action.Data is not { } data) return Task.FromResult<CodeAction?>(action);
+        return Read(data.Uri, ct, s =>
+        {
+            if (s.Version != data.Version)
+                throw new LocalRpcException("the document changed since this action was offered") { ErrorCode = ErrorCodes.ContentModified };
+            return SizeEverything(s) ?? action with { Edit = new WorkspaceEdit(new() { [data.Uri] = [] }) };
+        });
+    }
+
+    private const string SizeEverythingTitle = "Size everything: write every required size";
+
+    private static CodeAction? SizeEverything(DocumentSnapshot s)
+    {
+        var sized = SizeAll.Apply(s.Text);
+        return sized == s.Text ? null : new CodeAction(SizeEverythingTitle, "source.fixAll", null, null, Edit(s.Uri, [WholeDocument(s, sized)]));
+    }
 
     [JsonRpcMethod("textDocument/formatting", UseSingleObjectParameterDeserialization = true)]
     public Task<Protocol.TextEdit[]?> Formatting(DocumentFormattingParams p, CancellationToken ct) => Read(p.TextDocument.Uri, ct, s =>

@@ -44,7 +44,7 @@ public class FixtureTests
         var sb = new StringBuilder();
         foreach (var action in actions)
         {
-            var edits = action.Edit.Changes[uri].Select(e => new Parser.Text.TextEdit(
+            var edits = action.Edit!.Changes[uri].Select(e => new Parser.Text.TextEdit(
                 new Parser.Text.SourceRange(new(e.Range.Start.Line, e.Range.Start.Character), new(e.Range.End.Line, e.Range.End.Character)), e.NewText));
             sb.Append($"## {action.Kind}: {action.Title}\n").Append(Parser.Text.TextEdits.Apply(text, edits)).Append('\n');
         }

@@ -16,13 +16,13 @@ public sealed class InProcessServer : IAsyncDisposable
     public Task<int> Server { get; }
     public StringWriter Log { get; }
 
-    public static async Task<InProcessServer> StartAsync(object? options = null, string? rootUri = null)
+    public static async Task<InProcessServer> StartAsync(object? options = null, string? rootUri = null, object? capabilities = null)
     {
         var (serverSide, clientSide) = FullDuplexStream.CreatePair();
         var log = new StringWriter();
         var server = LanguageServer.RunAsync(serverSide, serverSide, TextWriter.Synchronized(log), TimeSpan.Zero);
         var client = new LspClient(clientSide, clientSide);
-        await client.InitializeAsync(options: options, rootUri: rootUri);
+        await client.InitializeAsync(options: options, rootUri: rootUri, capabilities: capabilities);
         return new InProcessServer(client, server, log);
     }
 

@@ -33,9 +33,9 @@ public sealed class LspClient : IAsyncDisposable
 
     public Task Notify(string method, object? parameters = null) => _rpc.NotifyWithParameterObjectAsync(method, parameters);
 
-    public async Task<InitializeResult> InitializeAsync(int? processId = null, object? options = null, string? rootUri = null)
+    public async Task<InitializeResult> InitializeAsync(int? processId = null, object? options = null, string? rootUri = null, object? capabilities = null)
     {
-        var result = await Request<InitializeResult>("initialize", new { processId, rootUri, capabilities = new { }, initializationOptions = options });
+        var result = await Request<InitializeResult>("initialize", new { processId, rootUri, capabilities = capabilities ?? new { }, initializationOptions = options });
         await Notify("initialized", new { });
         return result;
     }

@@ -67,8 +67,10 @@ async function sizeEverything(arg: unknown): Promise<void> {
     void vscode.window.showInformationMessage("Open a .motors file to size it.");
     return;
   }
+  // The server offers "size everything" without its edit and computes it on resolve; the last
+  // argument asks VS Code to resolve that one action.
   const actions = await vscode.commands.executeCommand<vscode.CodeAction[]>(
-    "vscode.executeCodeActionProvider", vscode.Uri.parse(target), new vscode.Range(0, 0, 0, 0), vscode.CodeActionKind.SourceFixAll.value);
+    "vscode.executeCodeActionProvider", vscode.Uri.parse(target), new vscode.Range(0, 0, 0, 0), vscode.CodeActionKind.SourceFixAll.value, 1);
   const action = actions?.find((a) => a.kind?.value === "source.fixAll" && a.edit);
   if (!action?.edit) {
     void vscode.window.showInformationMessage("Every size is already written.");

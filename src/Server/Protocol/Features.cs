@@ -6,7 +6,11 @@ public sealed record CodeActionContext(Diagnostic[] Diagnostics, string[]? Only)
 
 public sealed record CodeActionParams(TextDocumentIdentifier TextDocument, Range Range, CodeActionContext Context);
 
-public sealed record CodeAction(string Title, string Kind, Diagnostic[]? Diagnostics, bool? IsPreferred, WorkspaceEdit Edit);
+/// <summary>A code action; <see cref="Edit"/> is left out (and <see cref="Data"/> says what to compute) when the client resolves it later.</summary>
+public sealed record CodeAction(string Title, string Kind, Diagnostic[]? Diagnostics, bool? IsPreferred, WorkspaceEdit? Edit, CodeActionData? Data = null);
+
+/// <summary>What an unresolved "size everything" action is for: the document and the version it was offered on.</summary>
+public sealed record CodeActionData(string Uri, int Version);
 
 public sealed record CompletionParams(TextDocumentIdentifier TextDocument, Position Position);
 

@@ -17,7 +17,7 @@ public sealed record TextDocumentSyncOptions(bool OpenClose, int Change, SaveOpt
 
 public sealed record CompletionOptions(string[] TriggerCharacters, bool ResolveProvider);
 
-public sealed record CodeActionOptions(string[] CodeActionKinds);
+public sealed record CodeActionOptions(string[] CodeActionKinds, bool ResolveProvider);
 
 public sealed record RenameOptions(bool PrepareProvider);
 
