@@ -12,6 +12,9 @@ switch (args)
     case ["time", var n]:
         QuickTiming.Run(int.Parse(n));
         break;
+    case ["analyses", var n]:
+        QuickTiming.Analyses(int.Parse(n));
+        break;
     case ["updates", var n]:
         QuickTiming.Updates(int.Parse(n));
         break;

@@ -49,6 +49,22 @@ public static class QuickTiming
         return Task.CompletedTask;
     }
 
+    /// <summary>`analyses N`: 30 full analyses of one parsed list, for profiling.</summary>
+    public static void Analyses(int motors)
+    {
+        var parsed = DocumentParser.Parse(MotorListGenerator.Generate(motors));
+        var times = new List<double>();
+        for (var i = 0; i < 30; i++)
+        {
+            var sw = Stopwatch.StartNew();
+            Analyzer.Analyze(parsed);
+            times.Add(sw.Elapsed.TotalMilliseconds);
+        }
+
+        times.Sort();
+        Console.WriteLine($"analysis: min {times[0]:0.0} ms, median {times[15]:0.0} ms");
+    }
+
     /// <summary>`updates N`: 200 one-line value edits through the parser and analysis alone (no server), timed each.</summary>
     public static void Updates(int motors)
     {

@@ -19,6 +19,15 @@ public class PropertyTests
         Gen.Select(Gen.Int[0, ThreePhaseHp.Length - 1], Gen.OneOfConst(200m, 208m, 230m, 460m, 480m, 575m))
             .Select((i, v) => (ThreePhaseHp[i], v));
 
+    /// <summary>The number-only ampacity used to search sizes is the same computation as the explained one.</summary>
+    [Fact]
+    public void AllowableAmpsEqualsTheExplainedAllowableAmpacity() =>
+        Gen.Select(Gen.Int[0, ConductorSize.All.Count - 1], Gen.Int[1, 4], Conditions, Gen.Bool).Sample((size, sets, c, bcd) =>
+        {
+            var wire = new WireSpec(sets, ConductorSize.All[size]);
+            Assert.Equal(Ampacity.Allowable(wire, c, bcd).Value, Ampacity.AllowableAmps(wire, c, bcd));
+        }, iter: 2000);
+
     [Fact]
     public void MinimumConductorCarriesAtLeast125PercentOfFlc() =>
         Gen.Select(Motor, Conditions).Sample((motor, c) =>

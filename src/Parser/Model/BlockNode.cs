@@ -33,11 +33,12 @@ public abstract class BlockNode
     public IReadOnlyDictionary<string, Statement> Statements => _statements.ToDictionary(s => s.Keyword, StringComparer.OrdinalIgnoreCase);
 
     /// <summary>This block's statement with the given keyword, if written.</summary>
+    /// <remarks>Keywords are compared exactly: statements carry the canonical (lower-case) keyword whatever the text's case.</remarks>
     public Statement? Statement(string keyword)
     {
         foreach (var s in _statements)
         {
-            if (string.Equals(s.Keyword, keyword, StringComparison.OrdinalIgnoreCase)) return s;
+            if (ReferenceEquals(s.Keyword, keyword) || string.Equals(s.Keyword, keyword, StringComparison.Ordinal)) return s;
         }
 
         return null;
@@ -80,7 +81,7 @@ public abstract class BlockNode
     /// <summary>An argument of the header or of one of this block's statements.</summary>
     public Located<T>? Get<T>(string keyword, string arg)
     {
-        var statement = string.Equals(keyword, Header.Keyword, StringComparison.OrdinalIgnoreCase)
+        var statement = string.Equals(keyword, Header.Keyword, StringComparison.Ordinal)
             ? Header
             : Statement(keyword);
         return statement?.Arg(arg) is { Value: T value } a ? new Located<T>(value, a.Range) : null;
@@ -88,7 +89,7 @@ public abstract class BlockNode
 
     /// <summary>An argument's text as the formatter writes it (e.g. the insulation name).</summary>
     public Located<string>? GetText(string keyword, string arg) =>
-        (string.Equals(keyword, Header.Keyword, StringComparison.OrdinalIgnoreCase) ? Header : Statement(keyword))
+        (string.Equals(keyword, Header.Keyword, StringComparison.Ordinal) ? Header : Statement(keyword))
             ?.Arg(arg) is { } a ? new Located<string>(a.Canonical, a.Range) : null;
 
     public bool Has(string keyword) => Statement(keyword) is not null;
@@ -167,7 +168,18 @@ public sealed class MotorNode(Statement header, FeederNode feeder) : CircuitNode
     public Located<Quantity>? DisconnectPower => Get<Quantity>("disconnect", "power");
     public Located<Quantity>? ControllerPower => Get<Quantity>("controller", "power");
     public Located<int>? Quantity => Get<int>("quantity", "count");
-    public Located<string>? Like => Get<string>("like", "motor");
+    /// <summary>Read for every attribute a motor inherits, so kept once read (a node never changes).</summary>
+    public Located<string>? Like => _likeRead ? _like : ReadLike();
+
+    private Located<string>? _like;
+    private volatile bool _likeRead;
+
+    private Located<string>? ReadLike()
+    {
+        _like = Get<string>("like", "motor");
+        _likeRead = true;
+        return _like;
+    }
     public Located<NameplateBasis>? Application => Get<NameplateBasis>("application", "kind");
     public bool HardStart => Has("hard-start");
 }

@@ -11,28 +11,38 @@ namespace MotorLang.Sizing.Rules;
 public static class Ampacity
 {
     /// <summary>The ampacity a wire may carry under these conditions, with each factor as a step.</summary>
-    public static Result<decimal> Allowable(WireSpec wire, InstallationConditions c, bool designBcdMotor = false)
+    public static Result<decimal> Allowable(WireSpec wire, InstallationConditions c, bool designBcdMotor = false) =>
+        Compute(wire, c, designBcdMotor, new List<Step>());
+
+    /// <summary>
+    /// The allowable ampacity as a number only (null where <see cref="Allowable"/> has none): the
+    /// same computation without writing its steps, for searching many sizes.
+    /// </summary>
+    public static decimal? AllowableAmps(WireSpec wire, InstallationConditions c, bool designBcdMotor = false) =>
+        Compute(wire, c, designBcdMotor, null).Value;
+
+    /// <summary>One computation for both: steps are written only when a list is given to write them to.</summary>
+    private static Result<decimal> Compute(WireSpec wire, InstallationConditions c, bool designBcdMotor, List<Step>? steps)
     {
-        var steps = new List<Step>();
         var material = c.Material == ConductorMaterial.Copper ? "cu" : "al";
         var row = CodeTables.RowFor(CodeTables.Ampacity, wire.Size);
         var insulation = Math.Clamp(c.InsulationRating, 60, 90) switch { < 75 => 60, < 90 => 75, _ => 90 };
         var baseAmps = row is null ? null : CsvTable.Number(row[CodeTables.Ampacity.Column($"{material}{insulation}")]);
         if (baseAmps is null)
-            return Result<decimal>.Missing($"Table 310.16 has no {insulation} °C {(material == "cu" ? "copper" : "aluminum")} ampacity for {wire.Size}");
-        steps.Add(Step.Amps("Table ampacity", baseAmps.Value, "NEC Table 310.16",
+            return steps is null ? Result<decimal>.Missing("") : Result<decimal>.Missing($"Table 310.16 has no {insulation} °C {(material == "cu" ? "copper" : "aluminum")} ampacity for {wire.Size}");
+        steps?.Add(Step.Amps("Table ampacity", baseAmps.Value, "NEC Table 310.16",
             $"{wire.Size} {(material == "cu" ? "copper" : "aluminum")}, {insulation} °C column"));
 
         var ambient = AmbientFactor(c.AmbientCelsius, insulation);
         if (ambient is null)
-            return Result<decimal>.Missing($"{insulation} °C conductors may not be used at {Format.Number(c.AmbientCelsius)} °C ambient (Table 310.15(B)(1)(1))", [.. steps]);
+            return steps is null ? Result<decimal>.Missing("") : Result<decimal>.Missing($"{insulation} °C conductors may not be used at {Format.Number(c.AmbientCelsius)} °C ambient (Table 310.15(B)(1)(1))", [.. steps]);
         if (ambient != 1m)
-            steps.Add(new Step("Ambient correction", $"× {Format.Number(ambient.Value)}", "NEC Table 310.15(B)(1)(1)",
+            steps?.Add(new Step("Ambient correction", $"× {Format.Number(ambient.Value)}", "NEC Table 310.15(B)(1)(1)",
                 $"{Format.Number(c.AmbientCelsius)} °C ambient, {insulation} °C conductor"));
 
         var adjustment = AdjustmentFactor(c.CurrentCarrying);
         if (adjustment != 1m)
-            steps.Add(new Step("Bundling adjustment", $"× {Format.Number(adjustment)}", "NEC Table 310.15(C)(1)",
+            steps?.Add(new Step("Bundling adjustment", $"× {Format.Number(adjustment)}", "NEC Table 310.15(C)(1)",
                 $"{c.CurrentCarrying} current-carrying conductors in the raceway"));
 
         var corrected = baseAmps.Value * ambient.Value * adjustment;
@@ -40,6 +50,7 @@ public static class Ampacity
         var limitColumn = Math.Min(termination, insulation);
         var limit = CsvTable.Number(row![CodeTables.Ampacity.Column($"{material}{limitColumn}")]);
         var perSet = limit is { } l && l < corrected ? l : corrected;
+        if (steps is null) return new Result<decimal>(perSet * wire.Sets, []);
         if (limit is { } lim && lim < corrected)
             steps.Add(Step.Amps("Termination limit", lim, terminationRule, $"{termination} °C terminations: the {limitColumn} °C column limits the corrected {Format.Amps(corrected)}"));
         else if (corrected != baseAmps)
@@ -81,7 +92,7 @@ public static class Ampacity
             return marked;
         }
 
-        if (size <= ConductorSize.Parse("1"))
+        if (size <= OneAwg)
         {
             rule = designBcdMotor ? "NEC 110.14(C)(1)(a)(4)" : "NEC 110.14(C)(1)(a)";
             return designBcdMotor ? 75 : 60;
@@ -91,8 +102,23 @@ public static class Ampacity
         return 75;
     }
 
+    private static readonly ConductorSize OneAwg = ConductorSize.Parse("1");
+    private static readonly ConductorSize SmallestCopper = ConductorSize.Parse("14");
+    private static readonly ConductorSize SmallestAluminum = ConductorSize.Parse("12");
+
     /// <summary>Largest single conductor chosen before going to parallel sets: common practice, no source.</summary>
     public static readonly ConductorSize LargestSingle = ConductorSize.Parse("500");
+
+    /// <summary>Smallest conductor that may be run in parallel (310.10(G)(1)).</summary>
+    private static readonly ConductorSize SmallestParallel = ConductorSize.Parse("1/0");
+
+    /// <summary>Every arrangement <see cref="Minimum"/> tries, in the order it tries them (before the smallest size is applied).</summary>
+    private static readonly WireSpec[] Arrangements =
+    [
+        .. ConductorSize.All.Where(s => s <= LargestSingle).Select(WireSpec.Single),
+        .. Enumerable.Range(2, 9).SelectMany(sets => ConductorSize.All.Where(s => s >= SmallestParallel && s <= LargestSingle).Select(s => new WireSpec(sets, s))),
+        .. ConductorSize.All.Where(s => s > LargestSingle).Select(WireSpec.Single),
+    ];
 
     /// <summary>
     /// The smallest wire whose allowable ampacity is at least <paramref name="required"/>: one conductor per
@@ -101,15 +127,11 @@ public static class Ampacity
     /// </summary>
     public static Result<WireSpec> Minimum(decimal required, InstallationConditions c, bool designBcdMotor = false, ConductorSize? smallest = null)
     {
-        var start = smallest ?? ConductorSize.Parse(c.Material == ConductorMaterial.Copper ? "14" : "12");
-        var candidates = ConductorSize.All.Where(s => s >= start && s <= LargestSingle).Select(WireSpec.Single)
-            .Concat(Enumerable.Range(2, 9).SelectMany(sets => ConductorSize.All
-                .Where(s => s >= ConductorSize.Parse("1/0") && s >= start && s <= LargestSingle).Select(s => new WireSpec(sets, s))))
-            .Concat(ConductorSize.All.Where(s => s > LargestSingle).Select(WireSpec.Single));
-        foreach (var wire in candidates)
+        var start = smallest ?? (c.Material == ConductorMaterial.Copper ? SmallestCopper : SmallestAluminum);
+        foreach (var wire in Arrangements)
         {
-            var r = Allowable(wire, c, designBcdMotor);
-            if (r.Value >= required) return Chosen(wire, required, r);
+            if (wire.Size < start) continue;
+            if (AllowableAmps(wire, c, designBcdMotor) >= required) return Chosen(wire, required, Allowable(wire, c, designBcdMotor));
         }
 
         return Result<WireSpec>.Missing($"no conductor arrangement up to 10 parallel sets carries {Format.Amps(required)}");

@@ -70,8 +70,11 @@ public sealed class CsvTable
     public bool HasColumn(string name) => _columnIndex.ContainsKey(name);
 
     /// <summary>A numeric cell, or null for "-".</summary>
-    public static decimal? Number(string cell) =>
-        cell == "-" ? null : Numbers.Parse(cell) ?? throw new InvalidDataException($"'{cell}' is not a number");
+    public static decimal? Number(string cell) => ParsedCells.GetOrAdd(cell, static c =>
+        c == "-" ? null : Numbers.Parse(c) ?? throw new InvalidDataException($"'{c}' is not a number"));
+
+    /// <summary>Table cells are looked up for every motor; each distinct cell text is parsed once (the tables are fixed, so this stays small).</summary>
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, decimal?> ParsedCells = new(StringComparer.Ordinal);
 
     /// <summary>Checks that a column of keys rises strictly from row to row (tables are looked up by "first row at or above").</summary>
     public void RequireAscending(int column)
