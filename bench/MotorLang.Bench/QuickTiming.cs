@@ -54,6 +54,8 @@ public static class QuickTiming
     {
         var parsed = DocumentParser.Parse(MotorListGenerator.Generate(motors));
         var times = new List<double>();
+        var bytes = GC.GetAllocatedBytesForCurrentThread();
+        var pause = GC.GetTotalPauseDuration();
         for (var i = 0; i < 30; i++)
         {
             var sw = Stopwatch.StartNew();
@@ -62,7 +64,8 @@ public static class QuickTiming
         }
 
         times.Sort();
-        Console.WriteLine($"analysis: min {times[0]:0.0} ms, median {times[15]:0.0} ms");
+        Console.WriteLine($"analysis: min {times[0]:0.0} ms, median {times[15]:0.0} ms, {(GC.GetAllocatedBytesForCurrentThread() - bytes) / 30 >> 20} MB each, " +
+                          $"gc pause {(GC.GetTotalPauseDuration() - pause).TotalMilliseconds / 30:0.0} ms each");
     }
 
     /// <summary>`updates N`: 200 one-line value edits through the parser and analysis alone (no server), timed each.</summary>

@@ -226,7 +226,17 @@ public static class Analyzer
         {
             _scratch.Clear();
             var sizer = MotorSizer;
-            var r = Guard(() => sizer.Size(motor), motor.Header.KeywordToken.Range, _scratch) ?? new MotorResult(motor);
+            MotorResult r;
+            try
+            {
+                r = sizer.Size(motor);
+            }
+            catch (Exception e) when (e is not OutOfMemoryException)
+            {
+                r = new MotorResult(motor);
+                _scratch.Add(InternalError(motor.Header.KeywordToken.Range, e));
+            }
+
             r.Findings = [.. _scratch];
             foreach (var (finding, owner) in sizer.Inherited) _inherited.Add((finding, owner, motor));
             sizer.Inherited.Clear();
@@ -276,7 +286,17 @@ public static class Analyzer
                 }
 
                 _scratch.Clear();
-                var r = Guard(() => sizer.Size(feeder), feeder.Header.KeywordToken.Range, _scratch) ?? new FeederResult(feeder);
+                FeederResult r;
+                try
+                {
+                    r = sizer.Size(feeder);
+                }
+                catch (Exception e) when (e is not OutOfMemoryException)
+                {
+                    r = new FeederResult(feeder);
+                    _scratch.Add(InternalError(feeder.Header.KeywordToken.Range, e));
+                }
+
                 r.SizingFindings = [.. _scratch];
                 feeders[feeder] = r;
                 fresh.Add(r);
@@ -324,18 +344,8 @@ public static class Analyzer
             return findings?.ToArray() ?? [];
         }
 
-        /// <summary>A defect in one motor's sizing becomes a finding on that motor, never a crash of the whole analysis.</summary>
-        private static T? Guard<T>(Func<T> size, SourceRange range, List<Finding> findings) where T : class
-        {
-            try
-            {
-                return size();
-            }
-            catch (Exception e) when (e is not OutOfMemoryException)
-            {
-                findings.Add(new Finding(FindingCodes.CannotCheck, Severity.Warning, range, $"internal error while sizing this item ({e.GetType().Name}: {e.Message}); please report it"));
-                return null;
-            }
-        }
+        /// <summary>A defect in one item's sizing becomes a finding on that item, never a crash of the whole analysis.</summary>
+        private static Finding InternalError(SourceRange range, Exception e) =>
+            new(FindingCodes.CannotCheck, Severity.Warning, range, $"internal error while sizing this item ({e.GetType().Name}: {e.Message}); please report it");
     }
 }

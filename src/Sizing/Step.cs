@@ -19,24 +19,40 @@ public sealed record Step(string Label, string Value, string Rule, string Note)
 /// </summary>
 public sealed class Result<T> where T : struct
 {
-    private readonly Lazy<ImmutableArray<Step>> _steps;
+    // Steps as written, or the function that writes them on first read (then dropped). No Lazy
+    // object: analysis makes tens of thousands of results, and most are never explained.
+    private ImmutableArray<Step> _steps;
+    private Func<ImmutableArray<Step>>? _write;
 
     public Result(T? value, ImmutableArray<Step> steps, string? unavailable = null)
     {
         Value = value;
         Unavailable = unavailable;
-        _steps = new Lazy<ImmutableArray<Step>>(steps);
+        _steps = steps;
     }
 
     private Result(T value, Func<ImmutableArray<Step>> steps)
     {
         Value = value;
-        _steps = new Lazy<ImmutableArray<Step>>(steps, LazyThreadSafetyMode.PublicationOnly);
+        _write = steps;
     }
 
     public T? Value { get; }
 
-    public ImmutableArray<Step> Steps => _steps.Value;
+    /// <summary>The steps; deferred ones are written on first read (two readers at once may both write them, with the same result).</summary>
+    public ImmutableArray<Step> Steps
+    {
+        get
+        {
+            if (Volatile.Read(ref _write) is { } write)
+            {
+                ImmutableInterlocked.InterlockedInitialize(ref _steps, write());
+                Volatile.Write(ref _write, null);
+            }
+
+            return _steps;
+        }
+    }
 
     public string? Unavailable { get; }
 

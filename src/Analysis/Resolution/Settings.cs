@@ -29,7 +29,15 @@ public sealed record Settings(
     private static readonly string[] SettingKeywords = ["ambient", "conductor", "raceway", "ccc", "drop-limit", "power-factor", "code"];
 
     /// <summary>True when the block writes any installation setting of its own.</summary>
-    public static bool HasOwn(BlockNode block) => SettingKeywords.Any(block.Has);
+    public static bool HasOwn(BlockNode block)
+    {
+        foreach (var keyword in SettingKeywords)
+        {
+            if (block.Has(keyword)) return true;
+        }
+
+        return false;
+    }
 
     public static Settings For(BlockNode block, MotorList model)
     {

@@ -48,7 +48,15 @@ public sealed class MotorResult(MotorNode motor)
     public Result<ConductorSize>? MinimumGround { get; internal set; }
     public Result<Drop>? BranchDrop { get; internal set; }
     public decimal? TotalDropPercent { get; internal set; }
-    public Result<Drop>? StartingDrop { get; internal set; }
+    /// <summary>The drop while starting, worked out when first read (only a hover shows it).</summary>
+    public Result<Drop>? StartingDrop => _startingDrop ??= Starting is { } s
+        ? VoltageDrop.Starting(s.LockedRotorAmps, s.Feet, s.Wire, s.Volts, s.Phases, s.Material, s.Raceway)
+        : null;
+
+    private Result<Drop>? _startingDrop;
+
+    /// <summary>What the starting drop is worked out from.</summary>
+    internal StartingDropInput? Starting { get; set; }
     public Result<TradeSize>? MinimumConduit { get; internal set; }
     public decimal? ConduitFillPercent { get; internal set; }
     public Result<CurrentRange>? LockedRotorFromCodeLetter { get; internal set; }
@@ -60,6 +68,9 @@ public sealed class MotorResult(MotorNode motor)
     /// <summary>The current this motor adds to its feeder under 430.24 (its duty-cycle current when it has one).</summary>
     public decimal? DutyCycleAmps { get; internal set; }
 }
+
+internal readonly record struct StartingDropInput(decimal LockedRotorAmps, decimal Feet, WireSpec Wire, decimal Volts, Phases Phases,
+    ConductorMaterial Material, RacewayType Raceway);
 
 /// <summary>Everything computed for one feeder.</summary>
 public sealed class FeederResult(FeederNode feeder)

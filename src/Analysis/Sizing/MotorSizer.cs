@@ -158,13 +158,14 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         if (r.MaximumProtection.Value is not { } max) return;
         var deviceName = ShortCircuitProtection.DeviceName(r.Device);
         var unit = r.Device == ProtectiveDevice.InstantaneousTripBreaker ? "setting" : "rating";
-        var maxText = r.Device == ProtectiveDevice.InstantaneousTripBreaker ? Format.Number(decimal.Floor(max)) + "A" : Format.Number(max) + "A";
+        // Written only when a finding needs it: most motors are correct, and this runs for each.
+        string MaxText() => r.Device == ProtectiveDevice.InstantaneousTripBreaker ? Format.Number(decimal.Floor(max)) + "A" : Format.Number(max) + "A";
 
         if (device is null)
         {
             Add(FindingCodes.NotWritten, Severity.Information, motor.Header.KeywordToken.Range,
                 $"no short-circuit protection given; NEC 430.52 allows an {deviceName} up to {Format.Amps(max)}",
-                Insert(motor, $"protection inverse-time-breaker {maxText}", "Add the maximum inverse-time breaker"));
+                Insert(motor, $"protection inverse-time-breaker {MaxText()}", "Add the maximum inverse-time breaker"));
             return;
         }
 
@@ -173,7 +174,7 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
             var statement = deviceOwner!.Statement("protection")!;
             Add(FindingCodes.NotWritten, Severity.Information, device.Range,
                 $"no rating given; NEC 430.52 allows this {deviceName} up to {Format.Amps(max)}",
-                deviceOwner == motor ? new Fix($"Add the maximum {unit}", [EditBuilder.Append(statement, maxText)]) : null);
+                deviceOwner == motor ? new Fix($"Add the maximum {unit}", [EditBuilder.Append(statement, MaxText())]) : null);
             return;
         }
 
@@ -183,8 +184,8 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
             var rule = hardStart ? "NEC 430.52(C)(1)(b)" : "NEC 430.52(C)(1)";
             Add(FindingCodes.ProtectionTooLarge, Severity.Error, RangeOn(motor, ratingOwner, rating.Range),
                 $"{deviceName} {unit} {Format.Amps(value)} is above the {Format.Amps(max)} that {rule} allows for {Format.Amps(flc)} full-load current",
-                ReplaceOrOverride(motor, ratingOwner, "protection", "rating", maxText, $"Change the {unit} to {maxText}",
-                    overrideText: $"protection {Keywords.Devices.First(d => Equals(d.Value, r.Device)).Canonical} {maxText}"));
+                ReplaceOrOverride(motor, ratingOwner, "protection", "rating", MaxText(), $"Change the {unit} to {MaxText()}",
+                    overrideText: $"protection {Keywords.Devices.First(d => Equals(d.Value, r.Device)).Canonical} {MaxText()}"));
         }
         else if (value < flc * 1.25m)
         {
@@ -290,7 +291,7 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         // Starting drop at the largest locked-rotor current known: the code letter's upper end, else the table maximum.
         var lockedRotor = r.LockedRotorFromCodeLetter?.Value is { } range ? range.Maximum ?? range.Minimum : r.LockedRotorTableMaximum?.Value;
         if (lockedRotor is { } lra)
-            r.StartingDrop = VoltageDrop.Starting(lra, Conversions.Feet(length.Value), wire.Value, r.Volts, r.Phases, settings.Material, settings.Raceway);
+            r.Starting = new StartingDropInput(lra, Conversions.Feet(length.Value), wire.Value, r.Volts, r.Phases, settings.Material, settings.Raceway);
         if (r.BranchDrop.Value is { } drop && drop.Percent > settings.BranchDropLimit)
             Add(FindingCodes.VoltageDropHigh, Severity.Warning, (Get(motor, m => m.Wire) ?? null)?.Range ?? motor.Header.KeywordToken.Range,
                 $"branch voltage drop {drop.Percent:0.##} % is above the {Format.Percent(settings.BranchDropLimit)} limit (NEC 210.19 Informational Note No. 4)");

@@ -84,7 +84,7 @@ public abstract class BlockNode
         var statement = string.Equals(keyword, Header.Keyword, StringComparison.Ordinal)
             ? Header
             : Statement(keyword);
-        return statement?.Arg(arg) is { Value: T value } a ? new Located<T>(value, a.Range) : null;
+        return statement?.Arg(arg) is { Value: T value } a ? a.Located(value) : null;
     }
 
     /// <summary>An argument's text as the formatter writes it (e.g. the insulation name).</summary>

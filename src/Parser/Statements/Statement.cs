@@ -1,11 +1,27 @@
 using System.Collections.Immutable;
+using MotorLang.Parser.Model;
 using MotorLang.Parser.Syntax;
 using MotorLang.Parser.Text;
 
 namespace MotorLang.Parser.Statements;
 
 /// <summary>One argument as read: which position it filled, its value, where it is and how the formatter writes it.</summary>
-public sealed record Argument(ArgSpec Spec, object Value, SourceRange Range, string Canonical);
+public sealed record Argument(ArgSpec Spec, object Value, SourceRange Range, string Canonical)
+{
+    private object? _located;
+
+    /// <summary>
+    /// The value with its range, made once and kept: analysis reads every attribute of every motor
+    /// on each run, and an argument never changes.
+    /// </summary>
+    public Located<T> Located<T>(T value) => _located as Located<T> ?? (Located<T>)(_located = new Located<T>(value, Range));
+
+    // Equality is the argument's content; the kept Located is not part of it.
+    public bool Equals(Argument? other) =>
+        other is not null && Spec == other.Spec && Equals(Value, other.Value) && Range == other.Range && Canonical == other.Canonical;
+
+    public override int GetHashCode() => HashCode.Combine(Spec, Value, Range, Canonical);
+}
 
 /// <summary>A keyword line with its arguments matched to the keyword's positions.</summary>
 public sealed class Statement

@@ -4,7 +4,7 @@ using MotorLang.Sizing.Tables;
 namespace MotorLang.Sizing.Rules;
 
 /// <summary>What 430.22 needs to know about how the motor runs and starts.</summary>
-public sealed record BranchInput(
+public readonly record struct BranchInput(
     decimal FullLoadAmps,
     decimal? NameplateAmps = null,
     DutyKind Duty = DutyKind.Continuous,

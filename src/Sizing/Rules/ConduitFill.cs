@@ -4,7 +4,7 @@ using MotorLang.Sizing.Tables;
 namespace MotorLang.Sizing.Rules;
 
 /// <summary>The conductors in one raceway: how many of each size.</summary>
-public sealed record RacewayContents(int PhaseConductors, ConductorSize PhaseSize, ConductorSize? GroundSize);
+public readonly record struct RacewayContents(int PhaseConductors, ConductorSize PhaseSize, ConductorSize? GroundSize);
 
 /// <summary>A raceway trade size as Table 4 prints it ("3/4", "1-1/4").</summary>
 public readonly record struct TradeSize(string Name)

@@ -98,6 +98,16 @@ public static class Feeders
         return new Result<decimal>(rating, [.. steps]);
     }
 
-    private static List<FeederMotor> Expand(IReadOnlyList<FeederMotor> motors) =>
-        motors.SelectMany(m => Enumerable.Range(0, Math.Max(m.Quantity, 1)).Select(i => i == 0 ? m : m with { })).ToList();
+    /// <summary>One unit per motor: a line of several identical motors counts each (as distinct objects, so one can be "the largest").</summary>
+    private static List<FeederMotor> Expand(IReadOnlyList<FeederMotor> motors)
+    {
+        var units = new List<FeederMotor>(motors.Count);
+        foreach (var m in motors)
+        {
+            units.Add(m);
+            for (var i = 1; i < m.Quantity; i++) units.Add(m with { });
+        }
+
+        return units;
+    }
 }

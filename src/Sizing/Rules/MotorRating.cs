@@ -6,7 +6,7 @@ namespace MotorLang.Sizing.Rules;
 /// What the tables need to know about a motor. <paramref name="Volts"/> is the motor's rated
 /// voltage when known, otherwise the system voltage; the table headnotes map either to a column.
 /// </summary>
-public sealed record MotorRating(
+public readonly record struct MotorRating(
     decimal Power,
     bool Kilowatts,
     decimal Volts,

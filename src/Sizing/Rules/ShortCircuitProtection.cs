@@ -4,7 +4,7 @@ using MotorLang.Sizing.Tables;
 namespace MotorLang.Sizing.Rules;
 
 /// <summary>What 430.52 needs besides the full-load current.</summary>
-public sealed record ProtectionInput(
+public readonly record struct ProtectionInput(
     decimal FullLoadAmps,
     ProtectiveDevice Device,
     Phases Phases,

@@ -31,9 +31,10 @@ public static class VoltageDrop
         {
             var t = CodeTables.Impedance;
             var row = CodeTables.RowFor(t, wire.Size);
-            var conduit = raceway == RacewayType.Pvc ? "pvc" : "steel";
-            var resistance = row is null ? null : CsvTable.Number(row[t.Column($"r_{(material == ConductorMaterial.Copper ? "cu" : "al")}_{conduit}")]);
-            var reactance = row is null ? null : CsvTable.Number(row[t.Column(raceway == RacewayType.Pvc ? "xl_pvc" : "xl_steel")]);
+            var pvc = raceway == RacewayType.Pvc;
+            var column = material == ConductorMaterial.Copper ? (pvc ? "r_cu_pvc" : "r_cu_steel") : (pvc ? "r_al_pvc" : "r_al_steel");
+            var resistance = row is null ? null : CsvTable.Number(row[t.Column(column)]);
+            var reactance = row is null ? null : CsvTable.Number(row[t.Column(pvc ? "xl_pvc" : "xl_steel")]);
             if (resistance is null || reactance is null)
                 return Result<Drop>.Missing($"Chapter 9 Table 9 has no {wire.Size} row for this conductor");
             (r, x) = (resistance.Value, reactance.Value);

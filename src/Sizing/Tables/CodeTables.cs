@@ -70,6 +70,15 @@ public static class CodeTables
     }
 
     /// <summary>The row for a conductor size, or null when the table has none.</summary>
-    public static string[]? RowFor(CsvTable table, ConductorSize size) =>
-        table.Rows.FirstOrDefault(r => r[0] == size.Number);
+    public static string[]? RowFor(CsvTable table, ConductorSize size)
+    {
+        // Indexed, not foreach: Rows is an interface, and this runs twice per motor.
+        var rows = table.Rows;
+        for (var i = 0; i < rows.Count; i++)
+        {
+            if (rows[i][0] == size.Number) return rows[i];
+        }
+
+        return null;
+    }
 }
