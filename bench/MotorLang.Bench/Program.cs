@@ -12,6 +12,9 @@ switch (args)
     case ["time", var n]:
         QuickTiming.Run(int.Parse(n));
         break;
+    case ["parses", var n]:
+        QuickTiming.Parses(int.Parse(n));
+        break;
     case ["analyses", var n]:
         QuickTiming.Analyses(int.Parse(n));
         break;

@@ -49,6 +49,23 @@ public static class QuickTiming
         return Task.CompletedTask;
     }
 
+    /// <summary>`parses N`: 30 parses of one list, for profiling.</summary>
+    public static void Parses(int motors)
+    {
+        var text = MotorListGenerator.Generate(motors);
+        var times = new List<double>();
+        var pause = GC.GetTotalPauseDuration();
+        for (var i = 0; i < 30; i++)
+        {
+            var sw = Stopwatch.StartNew();
+            DocumentParser.Parse(text);
+            times.Add(sw.Elapsed.TotalMilliseconds);
+        }
+
+        times.Sort();
+        Console.WriteLine($"parse: min {times[0]:0.0} ms, median {times[15]:0.0} ms, gc pause {(GC.GetTotalPauseDuration() - pause).TotalMilliseconds / 30:0.0} ms each");
+    }
+
     /// <summary>`analyses N`: 30 full analyses of one parsed list, for profiling.</summary>
     public static void Analyses(int motors)
     {

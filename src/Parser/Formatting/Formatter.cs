@@ -57,7 +57,14 @@ public static class Formatter
         var args = statement.Args;
         var sorted = true;
         for (var i = 1; i < args.Length && sorted; i++) sorted = args[i - 1].Range.Start.CompareTo(args[i].Range.Start) < 0;
-        foreach (var arg in sorted ? args.AsEnumerable() : args.OrderBy(a => a.Range.Start)) sb.Append(' ').Append(arg.Canonical);
+        if (!sorted)
+        {
+            foreach (var arg in args.OrderBy(a => a.Range.Start)) sb.Append(' ').Append(arg.Canonical);
+            return sb;
+        }
+
+        // By index: this runs for every statement of the document, and enumerating through an interface allocates.
+        for (var i = 0; i < args.Length; i++) sb.Append(' ').Append(args[i].Canonical);
         return sb;
     }
 

@@ -16,6 +16,7 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
 {
     // Reused for every line: a document has one parser and reads one line at a time.
     private readonly List<Item> _items = [];
+    private Argument?[]?[] _filled = new Argument?[]?[8];
 
     /// <summary>A value made of one token or of a number and its unit written apart ("15 hp", "10 AWG").</summary>
     private readonly record struct Item(SyntaxToken First, SyntaxToken Last, LexicalValue Value)
@@ -30,7 +31,11 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
     {
         var before = diagnostics.Count;
         var items = Group(line.Tokens);
-        var filled = new Argument?[spec.Args.Length];
+        // Scratch arrays reused across statements (one per number of positions): a list has tens of thousands of statements.
+        var n = spec.Args.Length;
+        if (_filled.Length <= n) Array.Resize(ref _filled, n + 1);
+        var filled = _filled[n] ??= new Argument?[n];
+        Array.Clear(filled);
         var next = 0;
         foreach (var item in items)
         {
@@ -263,8 +268,12 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
 
     private static Argument Choose(ArgSpec arg, string text, SourceRange range)
     {
-        var choice = arg.Choices!.First(c => c.Matches(text));
-        return new Argument(arg, choice.Value, range, choice.Canonical);
+        foreach (var choice in arg.Choices!)
+        {
+            if (choice.Matches(text)) return new Argument(arg, choice.Value, range, choice.Canonical);
+        }
+
+        throw new InvalidOperationException($"'{text}' was placed in '{arg.Name}' without being one of its choices");
     }
 
     private List<Item> Group(ImmutableArray<SyntaxToken> tokens)

@@ -128,7 +128,7 @@ internal static class LineScanner
         }
 
         return new SyntaxLine(index, text, offset, content.Length, ending, indent, hasTab,
-            ImmutableArray.CreateRange(tokens), comment, inConflict);
+            tokens.Count == 0 ? [] : ImmutableArray.Create(System.Runtime.InteropServices.CollectionsMarshal.AsSpan(tokens)), comment, inConflict);
     }
 
     /// <summary>Returns the index after the closing quote, or the line's end when there is none.</summary>
