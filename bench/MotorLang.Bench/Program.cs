@@ -12,6 +12,9 @@ switch (args)
     case ["time", var n]:
         QuickTiming.Run(int.Parse(n));
         break;
+    case ["process", var n, var motorlang]:
+        await QuickTiming.ServerProcessMemory(int.Parse(n), motorlang);
+        break;
     case ["parses", var n]:
         QuickTiming.Parses(int.Parse(n));
         break;

@@ -49,6 +49,57 @@ public static class QuickTiming
         return Task.CompletedTask;
     }
 
+    /// <summary>
+    /// `process N path/to/motorlang.dll`: the real server process (as an editor starts it) with an
+    /// N-motor list open: its resident set and managed heap after the first diagnostics, after 200
+    /// value edits, and once it has been idle for two seconds. Linux (reads /proc).
+    /// </summary>
+    public static async Task ServerProcessMemory(int motors, string motorlang)
+    {
+        var info = new ProcessStartInfo("dotnet", ["exec", motorlang, "lsp", "--debounce-ms", "0"])
+        {
+            RedirectStandardInput = true, RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false,
+        };
+        using var process = Process.Start(info)!;
+        process.ErrorDataReceived += (_, _) => { };
+        process.BeginErrorReadLine();
+        var client = new MotorLang.Server.Tests.LspClient(process.StandardInput.BaseStream, process.StandardOutput.BaseStream);
+        await client.InitializeAsync(Environment.ProcessId);
+        Console.WriteLine($"started: {Memory(process)}");
+        var text = MotorListGenerator.Generate(motors);
+        const string uri = "file:///bench/process.motors";
+        await client.Open(uri, text);
+        await client.DiagnosticsAsync(uri, 1, TimeSpan.FromMinutes(2));
+        Console.WriteLine($"after open ({motors} motors): {Memory(process)}");
+        await Task.Delay(TimeSpan.FromSeconds(4));
+        Console.WriteLine($"after open and 4 s idle: {Memory(process)}, managed heap {await Heap(client) >> 20} MB");
+        var lines = text.Split('\n');
+        var lengthLines = Enumerable.Range(0, lines.Length).Where(i => lines[i].StartsWith("    length ", StringComparison.Ordinal)).ToArray();
+        for (var version = 2; version < 202; version++)
+        {
+            var at = new MotorLang.Server.Protocol.Position(lengthLines[version * 37 % lengthLines.Length], "    length ".Length);
+            await client.Change(uri, version, new MotorLang.Server.Protocol.TextDocumentContentChangeEvent(
+                new MotorLang.Server.Protocol.Range(at, at with { Character = at.Character + 1 }), (version % 9 + 1).ToString()));
+            await client.DiagnosticsAsync(uri, version, TimeSpan.FromMinutes(2));
+        }
+
+        Console.WriteLine($"after 200 value edits: {Memory(process)}, collector {await client.Request<System.Text.Json.JsonElement>("motorlang/gcMemory", new { })}, managed heap {await Heap(client) >> 20} MB");
+        await Task.Delay(TimeSpan.FromSeconds(4));
+        Console.WriteLine($"after 4 s idle: {Memory(process)}, collector {await client.Request<System.Text.Json.JsonElement>("motorlang/gcMemory", new { })}");
+        await client.Request<object?>("shutdown", null);
+        await client.Notify("exit");
+        await process.WaitForExitAsync();
+    }
+
+    private static string Memory(Process process)
+    {
+        var status = File.ReadAllLines($"/proc/{process.Id}/status");
+        string Field(string name) => status.First(l => l.StartsWith(name + ":", StringComparison.Ordinal)).Split(':')[1].Trim();
+        return $"resident {Field("VmRSS")} (peak {Field("VmHWM")})";
+    }
+
+    private static async Task<long> Heap(MotorLang.Server.Tests.LspClient client) => await client.Request<long>("motorlang/heapBytes", new { });
+
     /// <summary>`parses N`: 30 parses of one list, for profiling.</summary>
     public static void Parses(int motors)
     {
@@ -123,6 +174,18 @@ public static class QuickTiming
         await client.InitializeAsync();
         var text = MotorListGenerator.Generate(motors);
         const string uri = "file:///bench/edits.motors";
+        var opens = int.TryParse(Environment.GetEnvironmentVariable("OPENS"), out var o) ? o : 5;
+        for (var i = 0; i < opens; i++)
+        {
+            var openWatch = Stopwatch.StartNew();
+            var other = $"file:///bench/open{i}.motors";
+            await client.Open(other, text);
+            await client.DiagnosticsAsync(other, 1, TimeSpan.FromMinutes(2));
+            Console.Write($"open → diagnostics {openWatch.Elapsed.TotalMilliseconds:0} ms; ");
+            await client.Notify("textDocument/didClose", new MotorLang.Server.Protocol.DidCloseTextDocumentParams(new MotorLang.Server.Protocol.TextDocumentIdentifier(other)));
+        }
+
+        Console.WriteLine();
         await client.Open(uri, text);
         await client.DiagnosticsAsync(uri, 1, TimeSpan.FromMinutes(2));
         var lines = text.Split('\n');

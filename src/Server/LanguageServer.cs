@@ -1,3 +1,4 @@
+using System.Text.Encodings.Web;
 using System.Text.Json;
 using System.Text.Json.Serialization;
 using StreamJsonRpc;
@@ -13,6 +14,10 @@ public static class LanguageServer
     {
         PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
         DefaultIgnoreCondition = JsonIgnoreCondition.WhenWritingNull,
+        // Text goes out as UTF-8, as editors send it, not as \u escapes: messages and documents are
+        // full of °, ×, ≥ and descriptions in any script, and escaping them costs time and bytes.
+        // The "unsafe" in the name is about embedding JSON in HTML, which the protocol never does.
+        Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
     };
 
     /// <summary>Serves until 'exit' or until the client goes away; returns the process exit code.</summary>

@@ -25,6 +25,7 @@ public sealed class LanguageServerTarget
     private readonly DiagnosticScheduler _diagnostics;
     private readonly WorkspaceIndex _workspace;
     private readonly ServerLog _log;
+    private readonly MemoryTrimmer _trimmer;
     private readonly TaskCompletionSource<int> _exit = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private PresentationSettings _presentation = new();
     private bool _shutdown;
@@ -36,7 +37,12 @@ public sealed class LanguageServerTarget
     {
         _log = log;
         _workspace = new WorkspaceIndex(_store);
-        _diagnostics = new DiagnosticScheduler(p => rpc.NotifyWithParameterObjectAsync("textDocument/publishDiagnostics", p), debounce, m => _log.Error(m));
+        _trimmer = new MemoryTrimmer(TimeSpan.FromSeconds(2), 48L << 20, m => _log.Info(m));
+        _diagnostics = new DiagnosticScheduler(p =>
+        {
+            _trimmer.Touch();
+            return rpc.NotifyWithParameterObjectAsync("textDocument/publishDiagnostics", p);
+        }, debounce, m => _log.Error(m));
     }
 
     /// <summary>Completes with the process exit code once 'exit' arrives or the client process dies.</summary>
@@ -266,6 +272,14 @@ public sealed class LanguageServerTarget
     /// <summary>Debug request: the managed heap after a full collection, in bytes, for memory measurements.</summary>
     [JsonRpcMethod("motorlang/heapBytes")]
     public long HeapBytes() => GC.GetTotalMemory(forceFullCollection: true);
+
+    /// <summary>Debug: what the collector holds from the system (committed) against what is in use, without collecting.</summary>
+    [JsonRpcMethod("motorlang/gcMemory")]
+    public object GcMemory()
+    {
+        var info = GC.GetGCMemoryInfo();
+        return new { committed = info.TotalCommittedBytes, heap = info.HeapSizeBytes, fragmented = info.FragmentedBytes, gen0Budget = info.GenerationInfo[0].SizeAfterBytes };
+    }
 
     // ---- helpers ----
 
