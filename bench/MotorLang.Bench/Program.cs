@@ -1,7 +1,7 @@
 using BenchmarkDotNet.Running;
 using MotorLang.Bench;
 
-// `generate N [file]` writes a synthetic list; `time N` gives a quick look; anything else runs the benchmarks.
+// Quick modes (see bench/README.md); anything else runs the BenchmarkDotNet benchmarks.
 switch (args)
 {
     case ["generate", var count, ..]:
@@ -12,23 +12,20 @@ switch (args)
     case ["time", var n]:
         QuickTiming.Run(int.Parse(n));
         break;
-    case ["process", var n, var motorlang]:
-        await QuickTiming.ServerProcessMemory(int.Parse(n), motorlang);
-        break;
-    case ["parses", var n]:
-        QuickTiming.Parses(int.Parse(n));
-        break;
-    case ["analyses", var n]:
-        QuickTiming.Analyses(int.Parse(n));
+    case ["parses" or "analyses", var n]:
+        QuickTiming.Repeat(args[0], int.Parse(n));
         break;
     case ["updates", var n]:
         QuickTiming.Updates(int.Parse(n));
         break;
     case ["edits", var n]:
-        await QuickTiming.ServerEdits(int.Parse(n));
+        await ServerTiming.Edits(int.Parse(n));
         break;
     case ["memory", var n]:
-        await QuickTiming.ServerMemory(int.Parse(n));
+        MemoryReports.Retained(int.Parse(n));
+        break;
+    case ["process", var n, var motorlang]:
+        await MemoryReports.Process(int.Parse(n), motorlang);
         break;
     default:
         BenchmarkSwitcher.FromAssembly(typeof(ParseAndFormatBenchmarks).Assembly).Run(args);
