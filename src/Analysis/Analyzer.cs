@@ -1,13 +1,8 @@
 using System.Collections.Immutable;
 using MotorLang.Analysis.Findings;
-using MotorLang.Analysis.Fixes;
-using MotorLang.Analysis.Resolution;
 using MotorLang.Analysis.Sizing;
 using MotorLang.Parser;
-using MotorLang.Parser.Diagnostics;
 using MotorLang.Parser.Model;
-using MotorLang.Parser.Text;
-using MotorLang.Sizing;
 
 namespace MotorLang.Analysis;
 
@@ -19,7 +14,7 @@ public static class Analyzer
     public static AnalysisResult Analyze(ParseResult parse)
     {
         var model = parse.Model;
-        var run = new Run(parse);
+        var run = new SizingPass(parse);
         var motors = new Dictionary<MotorNode, MotorResult>();
         var likeUsers = new List<MotorNode>();
         foreach (var motor in model.Motors)
@@ -57,7 +52,7 @@ public static class Analyzer
 
         var model = parse.Model;
         var likeUsers = previous.LikeUsers.Select(u => edit.Copies.TryGetValue(u, out var c) ? (MotorNode)c : u).ToList();
-        var resize = MotorsToResize(edit, model, likeUsers);
+        var resize = UpdateScope.MotorsToResize(edit, model, likeUsers);
 
         var motors = new Dictionary<MotorNode, MotorResult>(previous.MotorTable);
         var owned = new HashSet<MotorResult>(ReferenceEqualityComparer.Instance);
@@ -70,7 +65,7 @@ public static class Analyzer
             else owned.Add(motors[copy] = earlier.Rebind(copy));
         }
 
-        var run = new Run(parse, previous.TakeCache());
+        var run = new SizingPass(parse, previous.TakeCache());
         var added = new List<RankedFinding>();
         foreach (var motor in resize)
         {
@@ -85,7 +80,7 @@ public static class Analyzer
             if (motors.TryGetValue(motor, out var r)) AddMotorFindings(added, r);
         }
 
-        var affected = FeedersToResize(edit, resize, run);
+        var affected = UpdateScope.FeedersToResize(edit, resize, run);
         var feeders = run.SizeFeeders(motors, previous.Feeders, affected, sharedMotor: r => !owned.Contains(r));
         foreach (var feeder in model.Feeders)
         {
@@ -101,7 +96,7 @@ public static class Analyzer
             AddFeederFindings(added, now);
         }
 
-        var parseFindings = SpliceLine(previous.ParseFindings, parse.Diagnostics, edit.Line, removed, added);
+        var parseFindings = UpdateScope.SpliceLine(previous.ParseFindings, parse.Diagnostics, edit.Line, removed, added);
         added.Sort(FindingOrder.Instance);
         var kept = previous.Ranked.Where(f => !removed.Contains(f.Finding)).ToList();
         var result = new AnalysisResult(parse, motors, feeders, FindingOrder.Merge(kept, added), parseFindings, likeUsers);
@@ -122,67 +117,6 @@ public static class Analyzer
 
     /// <summary>Motors whose header is unreadable and that give no power are left out rather than reported twice.</summary>
     private static bool Sized(MotorNode motor) => !motor.Header.Line.IsBroken || motor.Power is not null;
-
-    /// <summary>
-    /// The edited motor, or every motor of an edited feeder (they inherit its settings); then every
-    /// motor written 'like' one of those, directly or through others, since it takes their values
-    /// and defers to their findings.
-    /// </summary>
-    private static HashSet<MotorNode> MotorsToResize(ModelEdit edit, MotorList model, List<MotorNode> likeUsers)
-    {
-        var changed = edit.Edited switch
-        {
-            FeederNode feeder => feeder.Motors.ToHashSet(),
-            MotorNode motor => [motor],
-            _ => new HashSet<MotorNode>(),
-        };
-
-        var resize = new HashSet<MotorNode>(changed);
-        if (changed.Count == 0) return resize;
-        foreach (var user in likeUsers)
-        {
-            if (Likes.Chain(user, model).Skip(1).Any(changed.Contains)) resize.Add(user);
-        }
-
-        return resize;
-    }
-
-    /// <summary>
-    /// The edited feeder, the feeders of the re-sized motors, and every feeder those are supplied
-    /// from (their loads include the motors further down).
-    /// </summary>
-    private static HashSet<FeederNode> FeedersToResize(ModelEdit edit, HashSet<MotorNode> resize, Run run)
-    {
-        var affected = new HashSet<FeederNode> { edit.NewFeeder };
-        foreach (var motor in resize) affected.Add(motor.Feeder);
-        foreach (var feeder in affected.ToList())
-        {
-            for (var up = run.Supplier(feeder); up is not null && affected.Add(up); up = run.Supplier(up))
-            {
-            }
-        }
-
-        return affected;
-    }
-
-    /// <summary>The parse findings with the edited line's replaced; the replaced ones go to <paramref name="removed"/>, the new ones to <paramref name="added"/>.</summary>
-    private static ImmutableArray<Finding> SpliceLine(ImmutableArray<Finding> before, ImmutableArray<Diagnostic> diagnostics, int line,
-        HashSet<Finding> removed, List<RankedFinding> added)
-    {
-        var fresh = diagnostics.Where(d => d.Range.Start.Line == line).Select(Finding.From).ToList();
-        var first = 0;
-        while (first < before.Length && before[first].Range.Start.Line < line) first++;
-        var end = first;
-        while (end < before.Length && before[end].Range.Start.Line == line) end++;
-        if (first == end && fresh.Count == 0) return before;
-        for (var i = first; i < end; i++) removed.Add(before[i]);
-        for (var i = 0; i < fresh.Count; i++) added.Add(new RankedFinding(fresh[i], RankedFinding.ParseRank(line, i)));
-        var builder = ImmutableArray.CreateBuilder<Finding>(before.Length - (end - first) + fresh.Count);
-        builder.AddRange(before.AsSpan()[..first]);
-        builder.AddRange(fresh);
-        builder.AddRange(before.AsSpan()[end..]);
-        return builder.MoveToImmutable();
-    }
 
     private static void AddParseFindings(List<RankedFinding> into, ImmutableArray<Finding> parseFindings)
     {
@@ -207,145 +141,5 @@ public static class Analyzer
         for (var i = 0; i < r.SizingFindings.Length; i++) into.Add(new RankedFinding(r.SizingFindings[i], RankedFinding.FeederRank(line, i)));
         for (var i = 0; i < r.DropFindings.Length; i++)
             into.Add(new RankedFinding(r.DropFindings[i], RankedFinding.FeederRank(line, r.SizingFindings.Length + i)));
-    }
-
-    /// <summary>One pass of sizing over a parse: the shared pieces the motor and feeder sizers need.</summary>
-    private sealed class Run(ParseResult parse, SizingCache? cache = null)
-    {
-        private readonly EditBuilder _edits = new(parse.Tree);
-        private readonly SizingCache _cache = cache ?? new SizingCache();
-        private readonly List<Finding> _scratch = [];
-        private readonly List<(Finding Finding, MotorNode Owner, MotorNode Motor)> _inherited = [];
-        private MotorSizer? _motorSizer;
-
-        public SizingCache Cache => _cache;
-
-        private MotorSizer MotorSizer => _motorSizer ??= new MotorSizer(parse.Model, _edits, _scratch, _cache);
-
-        public MotorResult Size(MotorNode motor)
-        {
-            _scratch.Clear();
-            var sizer = MotorSizer;
-            MotorResult r;
-            try
-            {
-                r = sizer.Size(motor);
-            }
-            catch (Exception e) when (e is not OutOfMemoryException)
-            {
-                r = new MotorResult(motor);
-                _scratch.Add(InternalError(motor.Header.KeywordToken.Range, e));
-            }
-
-            r.Findings = [.. _scratch];
-            foreach (var (finding, owner) in sizer.Inherited) _inherited.Add((finding, owner, motor));
-            sizer.Inherited.Clear();
-            return r;
-        }
-
-        /// <summary>
-        /// A motor written "like" another shares that motor's mistakes. Where the other motor reports the
-        /// same problem, the fix belongs there, so this one keeps its finding but loses its own fix.
-        /// </summary>
-        public void ShareInheritedFixes(Dictionary<MotorNode, MotorResult> motors)
-        {
-            foreach (var (finding, owner, motor) in _inherited)
-            {
-                var source = motors.GetValueOrDefault(owner)?.Findings ?? [];
-                var atSource = source.Any(f => f.Code == finding.Code && f != finding
-                                               && f.Range.Start.Line >= owner.Header.Line.Index && f.Range.Start.Line <= owner.LastLine);
-                if (!atSource || motors.GetValueOrDefault(motor) is not { } r) continue;
-                var i = Array.IndexOf(r.Findings, finding);
-                if (i >= 0) r.Findings[i] = finding with { Fix = null, Message = $"{finding.Message} (inherited from {owner.Tag?.Value}; fix it there)" };
-            }
-
-            _inherited.Clear();
-        }
-
-        public FeederNode? Supplier(FeederNode feeder) => Sizing.FeederSizer.Supplier(feeder, parse.Model);
-
-        /// <summary>
-        /// Sizes the feeders in <paramref name="affected"/> (all when null) and keeps the others'
-        /// results from <paramref name="previous"/>; then brings every feeder's drop from the source
-        /// up to date and, on each feeder sized or whose drop moved, each motor's total drop. A
-        /// result that belongs to an earlier analysis is copied before it is changed.
-        /// </summary>
-        public Dictionary<FeederNode, FeederResult> SizeFeeders(Dictionary<MotorNode, MotorResult> motors,
-            IReadOnlyDictionary<FeederNode, FeederResult>? previous, HashSet<FeederNode>? affected, Func<MotorResult, bool>? sharedMotor)
-        {
-            var model = parse.Model;
-            var sizer = new FeederSizer(model, motors, _edits, _scratch, _cache);
-            var feeders = new Dictionary<FeederNode, FeederResult>(model.Feeders.Count);
-            var fresh = new HashSet<FeederResult>(ReferenceEqualityComparer.Instance);
-            foreach (var feeder in model.Feeders)
-            {
-                if (affected is not null && !affected.Contains(feeder) && previous?.GetValueOrDefault(feeder) is { } kept)
-                {
-                    feeders[feeder] = kept;
-                    continue;
-                }
-
-                _scratch.Clear();
-                FeederResult r;
-                try
-                {
-                    r = sizer.Size(feeder);
-                }
-                catch (Exception e) when (e is not OutOfMemoryException)
-                {
-                    r = new FeederResult(feeder);
-                    _scratch.Add(InternalError(feeder.Header.KeywordToken.Range, e));
-                }
-
-                r.SizingFindings = [.. _scratch];
-                feeders[feeder] = r;
-                fresh.Add(r);
-            }
-
-            foreach (var feeder in model.Feeders)
-            {
-                var r = feeders[feeder];
-                var total = sizer.CumulativeDrop(feeder, feeders);
-                if (r.CumulativeDropPercent == total && !fresh.Contains(r)) continue;
-                if (!fresh.Contains(r)) fresh.Add(feeders[feeder] = r = r.Copy());
-                r.CumulativeDropPercent = total;
-            }
-
-            foreach (var feeder in model.Feeders)
-            {
-                if (feeders[feeder] is var r && fresh.Contains(r)) r.DropFindings = TotalDrops(model, feeder, r, motors, sharedMotor);
-            }
-
-            return feeders;
-        }
-
-        /// <summary>Each motor's drop from the source (its feeder's plus its branch) against the total limit.</summary>
-        private static Finding[] TotalDrops(MotorList model, FeederNode feeder, FeederResult fr, Dictionary<MotorNode, MotorResult> motors,
-            Func<MotorResult, bool>? sharedMotor)
-        {
-            List<Finding>? findings = null;
-            var upstream = fr.CumulativeDropPercent ?? 0;
-            foreach (var motor in feeder.Motors)
-            {
-                if (motors.GetValueOrDefault(motor) is not { } r || r.BranchDrop?.Value is not { } branch) continue;
-                var total = upstream + branch.Percent;
-                if (r.TotalDropPercent != total)
-                {
-                    if (sharedMotor?.Invoke(r) == true) motors[motor] = r = r.Rebind(motor);
-                    r.TotalDropPercent = total;
-                }
-
-                var limit = (r.Settings ?? Settings.For(motor, model)).TotalDropLimit;
-                if (upstream > 0 && total > limit)
-                    (findings ??= []).Add(new Finding(FindingCodes.VoltageDropHigh, Severity.Warning, motor.Header.KeywordToken.Range,
-                        $"total voltage drop to {r.Tag} is {total:0.##} % (feeders {upstream:0.##} % + branch {branch.Percent:0.##} %), above the {Format.Percent(limit)} limit (NEC 215.2(A)(2) Informational Note No. 2)"));
-            }
-
-            return findings?.ToArray() ?? [];
-        }
-
-        /// <summary>A defect in one item's sizing becomes a finding on that item, never a crash of the whole analysis.</summary>
-        private static Finding InternalError(SourceRange range, Exception e) =>
-            new(FindingCodes.CannotCheck, Severity.Warning, range, $"internal error while sizing this item ({e.GetType().Name}: {e.Message}); please report it");
     }
 }
