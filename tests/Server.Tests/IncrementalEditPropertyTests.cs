@@ -50,6 +50,55 @@ public class IncrementalEditPropertyTests
         }, iter: 100, threads: 1);
     }
 
+    private static readonly string[] Examples =
+        Directory.GetFiles(Path.Combine(Fixture.Root, "examples"), "*.motors").Order().Select(File.ReadAllText).ToArray();
+
+    private static readonly Gen<string> Typed = Gen.OneOfConst("", "1", "0", "x", " ", "A", "hp", "AWG", "😀", "°", "泵", "\"", "#");
+
+    /// <summary>
+    /// Edits inside one line, each waited for, so that every change takes the one-line path (the
+    /// previous version is analysed): the server's text and diagnostics equal a fresh analysis.
+    /// Ranges may run past the line's end (the protocol clamps them) but never split a character.
+    /// </summary>
+    [Fact]
+    public async Task OneLineEditsAppliedOnTheLastAnalysisMatchAFreshAnalysis()
+    {
+        await using var server = await InProcessServer.StartAsync();
+        var client = server.Client;
+        var run = 0;
+        await Gen.Select(Gen.Int[0, Examples.Length - 1], Gen.Select(Gen.Double[0, 1], Gen.Double[0, 1.2], Gen.Int[0, 3], Typed).Array[1, 8])
+            .SampleAsync(async session =>
+            {
+                var uri = $"file:///lines/{Interlocked.Increment(ref run)}.motors";
+                var text = Examples[session.Item1];
+                await client.Open(uri, text);
+                await client.DiagnosticsAsync(uri, 1);
+                var version = 1;
+                foreach (var (linePick, startPick, length, insert) in session.Item2)
+                {
+                    var lines = text.Split('\n');
+                    var line = Math.Min(lines.Length - 1, (int)(linePick * lines.Length));
+                    var content = lines[line].TrimEnd('\r');
+                    var start = Math.Min((int)(startPick * content.Length), content.Length);
+                    while (start > 0 && start < content.Length && char.IsLowSurrogate(content[start])) start--;
+                    var end = start + length;
+                    while (end < content.Length && char.IsLowSurrogate(content[end])) end++;
+                    var clampedEnd = Math.Min(end, content.Length);
+                    lines[line] = content[..start] + insert + content[clampedEnd..] + (lines[line].EndsWith('\r') ? "\r" : "");
+                    text = string.Join('\n', lines);
+                    await client.Change(uri, ++version, new TextDocumentContentChangeEvent(new Protocol.Range(new(line, start), new(line, end)), insert));
+                    var published = await client.DiagnosticsAsync(uri, version);
+                    var fresh = Analysis.Analyzer.Analyze(text).Findings;
+                    Assert.Equal(fresh.Select(f => $"{f.Code} {f.Range} {f.Message}"),
+                        published.Diagnostics.Select(d => $"{d.Code} {d.Range.Start.Line + 1}:{d.Range.Start.Character + 1}-{d.Range.End.Line + 1}:{d.Range.End.Character + 1} {d.Message}"));
+                }
+
+                var copy = await client.Request<DocumentTextResult>("motorlang/documentText", new TextDocumentIdentifier(uri));
+                Assert.Equal(text, copy.Text);
+                await client.Notify("textDocument/didClose", new DidCloseTextDocumentParams(new TextDocumentIdentifier(uri)));
+            }, iter: 60, threads: 1);
+    }
+
     /// <summary>The LSP position of an offset, counted independently of the server's code: lines end at "\n".</summary>
     private static Position PositionOf(string text, int offset)
     {
