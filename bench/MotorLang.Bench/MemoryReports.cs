@@ -85,7 +85,7 @@ public static class MemoryReports
     {
         var status = File.ReadAllLines($"/proc/{process.Id}/status");
         string Field(string name) => status.First(l => l.StartsWith(name + ":", StringComparison.Ordinal)).Split(':')[1].Trim();
-        return $"resident {Field("VmRSS")} (peak {Field("VmHWM")})";
+        return $"resident {Field("VmRSS")} ({Field("RssAnon")} private, {Field("RssFile")} mapped files; peak {Field("VmHWM")})";
     }
 
     private static async Task<string> Collector(LspClient client)

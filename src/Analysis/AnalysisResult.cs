@@ -1,3 +1,4 @@
+using MotorLang.Parser.Collections;
 using System.Collections.Immutable;
 using MotorLang.Analysis.Findings;
 using MotorLang.Analysis.Fixes;
@@ -12,9 +13,9 @@ namespace MotorLang.Analysis;
 /// <summary>The analysis of one document: per-motor and per-feeder results, and every finding in line order.</summary>
 public sealed class AnalysisResult
 {
-    private readonly Dictionary<MotorNode, MotorResult> _motors;
+    private readonly LayeredMap<MotorNode, MotorResult> _motors;
 
-    internal AnalysisResult(ParseResult parse, Dictionary<MotorNode, MotorResult> motors, IReadOnlyDictionary<FeederNode, FeederResult> feeders,
+    internal AnalysisResult(ParseResult parse, LayeredMap<MotorNode, MotorResult> motors, IReadOnlyDictionary<FeederNode, FeederResult> feeders,
         IReadOnlyList<RankedFinding> ranked, ImmutableArray<Finding> parseFindings, IReadOnlyList<MotorNode> likeUsers)
     {
         Ranked = ranked;
@@ -39,7 +40,7 @@ public sealed class AnalysisResult
 
     // The parts Findings is made of, kept so that an update after a one-line edit replaces only
     // the parts the edit can have changed.
-    internal Dictionary<MotorNode, MotorResult> MotorTable => _motors;
+    internal LayeredMap<MotorNode, MotorResult> MotorTable => _motors;
 
     /// <summary><see cref="Findings"/> with their ranks, for merging in an update.</summary>
     internal IReadOnlyList<RankedFinding> Ranked { get; }

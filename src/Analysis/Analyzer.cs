@@ -1,3 +1,4 @@
+using MotorLang.Parser.Collections;
 using System.Collections.Immutable;
 using MotorLang.Analysis.Findings;
 using MotorLang.Analysis.Sizing;
@@ -15,7 +16,7 @@ public static class Analyzer
     {
         var model = parse.Model;
         var run = new SizingPass(parse);
-        var motors = new Dictionary<MotorNode, MotorResult>();
+        var motors = LayeredMap<MotorNode, MotorResult>.Empty().ToBuilder();
         var likeUsers = new List<MotorNode>();
         foreach (var motor in model.Motors)
         {
@@ -26,12 +27,13 @@ public static class Analyzer
         run.ShareInheritedFixes(motors);
         var feeders = run.SizeFeeders(motors, previous: null, affected: null, sharedMotor: null);
         var parseFindings = parse.Diagnostics.Select(Finding.From).ToImmutableArray();
+        var motorMap = motors.ToMap();
         var all = new List<RankedFinding>();
         AddParseFindings(all, parseFindings);
-        foreach (var r in motors.Values) AddMotorFindings(all, r);
+        foreach (var r in motorMap.Values) AddMotorFindings(all, r);
         foreach (var r in feeders.Values) AddFeederFindings(all, r);
         all.Sort(FindingOrder.Instance);
-        var result = new AnalysisResult(parse, motors, feeders, all, parseFindings, likeUsers);
+        var result = new AnalysisResult(parse, motorMap, feeders, all, parseFindings, likeUsers);
         result.KeepCache(run.Cache);
         return result;
     }
@@ -54,7 +56,7 @@ public static class Analyzer
         var likeUsers = previous.LikeUsers.Select(u => edit.Copies.TryGetValue(u, out var c) ? (MotorNode)c : u).ToList();
         var resize = UpdateScope.MotorsToResize(edit, model, likeUsers);
 
-        var motors = new Dictionary<MotorNode, MotorResult>(previous.MotorTable);
+        var motors = previous.MotorTable.ToBuilder();
         var owned = new HashSet<MotorResult>(ReferenceEqualityComparer.Instance);
         var removed = new HashSet<Finding>(ReferenceEqualityComparer.Instance);
         foreach (var old in edit.OldFeeder.Motors)
@@ -99,7 +101,7 @@ public static class Analyzer
         var parseFindings = UpdateScope.SpliceLine(previous.ParseFindings, parse.Diagnostics, edit.Line, removed, added);
         added.Sort(FindingOrder.Instance);
         var kept = previous.Ranked.Where(f => !removed.Contains(f.Finding)).ToList();
-        var result = new AnalysisResult(parse, motors, feeders, FindingOrder.Merge(kept, added), parseFindings, likeUsers);
+        var result = new AnalysisResult(parse, motors.ToMap(), feeders, FindingOrder.Merge(kept, added), parseFindings, likeUsers);
         result.KeepCache(run.Cache);
         return result;
     }

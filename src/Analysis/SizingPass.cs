@@ -1,3 +1,4 @@
+using MotorLang.Parser.Collections;
 using MotorLang.Analysis.Findings;
 using MotorLang.Analysis.Fixes;
 using MotorLang.Analysis.Resolution;
@@ -57,7 +58,7 @@ internal sealed class SizingPass(ParseResult parse, SizingCache? cache = null)
     /// A motor written "like" another shares that motor's mistakes. Where the other motor reports the
     /// same problem, the fix belongs there, so this one keeps its finding but loses its own fix.
     /// </summary>
-    public void ShareInheritedFixes(Dictionary<MotorNode, MotorResult> motors)
+    public void ShareInheritedFixes(LayeredMap<MotorNode, MotorResult>.Builder motors)
     {
         foreach (var (finding, owner, motor) in _inherited)
         {
@@ -80,7 +81,7 @@ internal sealed class SizingPass(ParseResult parse, SizingCache? cache = null)
     /// up to date and, on each feeder sized or whose drop moved, each motor's total drop. A
     /// result that belongs to an earlier analysis is copied before it is changed.
     /// </summary>
-    public Dictionary<FeederNode, FeederResult> SizeFeeders(Dictionary<MotorNode, MotorResult> motors,
+    public Dictionary<FeederNode, FeederResult> SizeFeeders(LayeredMap<MotorNode, MotorResult>.Builder motors,
         IReadOnlyDictionary<FeederNode, FeederResult>? previous, HashSet<FeederNode>? affected, Func<MotorResult, bool>? sharedMotor)
     {
         var model = parse.Model;
@@ -120,7 +121,7 @@ internal sealed class SizingPass(ParseResult parse, SizingCache? cache = null)
     }
 
     /// <summary>Each motor's drop from the source (its feeder's plus its branch) against the total limit.</summary>
-    private static Finding[] TotalDrops(MotorList model, FeederNode feeder, FeederResult fr, Dictionary<MotorNode, MotorResult> motors,
+    private static Finding[] TotalDrops(MotorList model, FeederNode feeder, FeederResult fr, LayeredMap<MotorNode, MotorResult>.Builder motors,
         Func<MotorResult, bool>? sharedMotor)
     {
         List<Finding>? findings = null;

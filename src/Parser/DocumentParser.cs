@@ -73,6 +73,6 @@ public static class DocumentParser
         var start = hasBom ? 1 : 0;
         var line = new SyntaxLine(0, text, start, text.Length - start, "", 0, false, [], null, inConflict: false) { IsBroken = true };
         var diags = diagnostics.ToImmutableArray();
-        return new ParseResult(new SyntaxTree(text, hasBom, [line], diags), new MotorList(null, [], new(StringComparer.OrdinalIgnoreCase)), diags);
+        return new ParseResult(new SyntaxTree(text, hasBom, LineList.From([line]), diags), new MotorList(null, [], new(StringComparer.OrdinalIgnoreCase)), diags);
     }
 }

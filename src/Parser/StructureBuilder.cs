@@ -28,7 +28,7 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
     private readonly Dictionary<string, CircuitNode> _byTag = new(StringComparer.OrdinalIgnoreCase);
     private ProjectNode? _project;
 
-    public MotorList Build(ImmutableArray<SyntaxLine> lines)
+    public MotorList Build(LineList lines)
     {
         _stack.Add(new Block(BlockKind.Root, -1, null, false) { ChildIndent = 0 });
         foreach (var line in lines)

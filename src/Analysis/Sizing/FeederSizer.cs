@@ -1,3 +1,4 @@
+using MotorLang.Parser.Collections;
 using MotorLang.Analysis.Findings;
 using MotorLang.Analysis.Fixes;
 using MotorLang.Analysis.Resolution;
@@ -14,7 +15,7 @@ namespace MotorLang.Analysis.Sizing;
 /// Sizes feeders (430.24, 430.62(A)) from the motors and loads they supply, including those on
 /// feeders supplied from them ('from'), so a switchboard feeder carries its motor control centers.
 /// </summary>
-internal sealed class FeederSizer(MotorList model, IReadOnlyDictionary<MotorNode, MotorResult> motors, EditBuilder edits, List<Finding> findings, SizingCache cache)
+internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorResult>.Builder motors, EditBuilder edits, List<Finding> findings, SizingCache cache)
 {
     private static readonly decimal Sqrt3 = 1.7320508075688772935274463415m;
 

@@ -1,11 +1,18 @@
+using MotorLang.Parser.Collections;
+
 namespace MotorLang.Parser.Model;
 
 /// <summary>The typed model of one document: the project block and the feeders with their motors and loads.</summary>
 public sealed class MotorList
 {
-    private readonly Dictionary<string, CircuitNode> _byTag;
+    private readonly LayeredMap<string, CircuitNode> _byTag;
 
     internal MotorList(ProjectNode? project, IReadOnlyList<FeederNode> feeders, Dictionary<string, CircuitNode> byTag)
+        : this(project, feeders, LayeredMap<string, CircuitNode>.Over(byTag))
+    {
+    }
+
+    private MotorList(ProjectNode? project, IReadOnlyList<FeederNode> feeders, LayeredMap<string, CircuitNode> byTag)
     {
         Project = project;
         Feeders = feeders;
@@ -28,14 +35,14 @@ public sealed class MotorList
     {
         var feeders = Feeders.ToArray();
         feeders[Array.IndexOf(feeders, old)] = replacement;
-        var byTag = new Dictionary<string, CircuitNode>(_byTag, StringComparer.OrdinalIgnoreCase);
+        var byTag = _byTag.ToBuilder();
         foreach (var (was, now) in copies)
         {
             // Only where the tag was registered to this node: a duplicate tag stays with its first user.
             if (was.Tag is { } tag && byTag.TryGetValue(tag.Value, out var registered) && ReferenceEquals(registered, was)) byTag[tag.Value] = now;
         }
 
-        return new MotorList(Project, feeders, byTag);
+        return new MotorList(Project, feeders, byTag.ToMap());
     }
 
     /// <summary>The innermost block whose lines include <paramref name="line"/>, found by binary search over the ordered blocks.</summary>

@@ -11,9 +11,9 @@ namespace MotorLang.Parser.Syntax;
 /// </summary>
 internal static class LineScanner
 {
-    public static ImmutableArray<SyntaxLine> Scan(string text, int start, List<Diagnostic> diagnostics)
+    public static LineList Scan(string text, int start, List<Diagnostic> diagnostics)
     {
-        var lines = ImmutableArray.CreateBuilder<SyntaxLine>();
+        var lines = new List<SyntaxLine>();
         var pool = new StringPool();
         var tokens = new List<SyntaxToken>();
         var conflictOpen = false;
@@ -51,7 +51,7 @@ internal static class LineScanner
             offset = next;
         }
 
-        return lines.ToImmutable();
+        return LineList.From(lines);
     }
 
     /// <summary>Scans one line on its own (its text is the whole source), for re-reading a single edited line.</summary>

@@ -10,7 +10,7 @@ public sealed class SyntaxTree
     private string? _text;
 
     /// <summary>A tree; <paramref name="text"/> may be null when the tree was made by re-reading one line, and is then joined from the lines when first asked for.</summary>
-    internal SyntaxTree(string? text, bool hasBom, ImmutableArray<SyntaxLine> lines, ImmutableArray<Diagnostic> diagnostics)
+    internal SyntaxTree(string? text, bool hasBom, LineList lines, ImmutableArray<Diagnostic> diagnostics)
     {
         _text = text;
         HasBom = hasBom;
@@ -26,7 +26,7 @@ public sealed class SyntaxTree
 
     public bool HasBom { get; }
 
-    public ImmutableArray<SyntaxLine> Lines { get; }
+    public LineList Lines { get; }
 
     /// <summary>Syntax and structure diagnostics, in line order.</summary>
     public ImmutableArray<Diagnostic> Diagnostics { get; }
