@@ -74,6 +74,7 @@ public sealed class LayeredMap<TKey, TValue> : IReadOnlyDictionary<TKey, TValue>
         private readonly Dictionary<TKey, TValue> _set;
         private readonly HashSet<TKey> _removed;
         private int _count;
+        private bool _built;
 
         internal Builder(LayeredMap<TKey, TValue> from)
         {
@@ -90,6 +91,7 @@ public sealed class LayeredMap<TKey, TValue> : IReadOnlyDictionary<TKey, TValue>
             get => TryGetValue(key, out var v) ? v : throw new KeyNotFoundException($"{key} is not in the map");
             set
             {
+                NotBuilt();
                 if (!ContainsKey(key)) _count++;
                 _set[key] = value;
                 _removed.Remove(key);
@@ -114,6 +116,7 @@ public sealed class LayeredMap<TKey, TValue> : IReadOnlyDictionary<TKey, TValue>
 
         public bool Remove(TKey key, [MaybeNullWhen(false)] out TValue value)
         {
+            NotBuilt();
             if (!TryGetValue(key, out value)) return false;
             _set.Remove(key);
             if (_base.ContainsKey(key)) _removed.Add(key);
@@ -121,8 +124,11 @@ public sealed class LayeredMap<TKey, TValue> : IReadOnlyDictionary<TKey, TValue>
             return true;
         }
 
+        /// <summary>The new version. The builder is spent afterwards: its layer may now be the map's.</summary>
         public LayeredMap<TKey, TValue> ToMap()
         {
+            NotBuilt();
+            _built = true;
             if (_set.Count + _removed.Count <= Math.Max(256, _base.Count / 4))
                 return new LayeredMap<TKey, TValue>(_base, _set, _removed, _count);
             // Fold the layer in: a map built from nothing simply adopts its layer as the base.
@@ -136,6 +142,11 @@ public sealed class LayeredMap<TKey, TValue> : IReadOnlyDictionary<TKey, TValue>
 
             foreach (var kv in _set) folded[kv.Key] = kv.Value;
             return new LayeredMap<TKey, TValue>(folded, new(_set.Comparer), new(_removed.Comparer), _count);
+        }
+
+        private void NotBuilt()
+        {
+            if (_built) throw new InvalidOperationException("this builder has made its map already; start another from the map");
         }
     }
 }
