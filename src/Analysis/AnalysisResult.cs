@@ -1,12 +1,12 @@
-using MotorLang.Parser.Collections;
 using System.Collections.Immutable;
 using MotorLang.Analysis.Findings;
 using MotorLang.Analysis.Fixes;
 using MotorLang.Analysis.Sizing;
-using MotorLang.Parser;
+using MotorLang.Parser.Collections;
 using MotorLang.Parser.Diagnostics;
 using MotorLang.Parser.Model;
 using MotorLang.Parser.Text;
+using MotorLang.Parser;
 
 namespace MotorLang.Analysis;
 

@@ -1,9 +1,9 @@
-using MotorLang.Parser.Collections;
 using System.Collections.Immutable;
 using MotorLang.Analysis.Findings;
 using MotorLang.Analysis.Sizing;
-using MotorLang.Parser;
+using MotorLang.Parser.Collections;
 using MotorLang.Parser.Model;
+using MotorLang.Parser;
 
 namespace MotorLang.Analysis;
 
@@ -43,9 +43,10 @@ public static class Analyzer
     /// made from the previous analysis: only what the edit can affect is sized again — the edited
     /// motor and the motors written 'like' it (or every motor of an edited feeder), the feeders
     /// they are on and the feeders those are supplied from; feeders further down only get their
-    /// drop from the source brought up to date. Everything else is kept. Null when <paramref name="parse"/> is not such a re-read of
-    /// <paramref name="previous"/>'s document; then call <see cref="Analyze(ParseResult)"/>.
-    /// The result equals a full analysis; tests check that on random edits.
+    /// drop from the source brought up to date. Everything else is kept. Null when
+    /// <paramref name="parse"/> is not such a re-read of <paramref name="previous"/>'s document;
+    /// then call <see cref="Analyze(ParseResult)"/>. The result equals a full analysis; tests
+    /// check that on random edits.
     /// </summary>
     public static AnalysisResult? Update(AnalysisResult previous, ParseResult parse)
     {

@@ -1,11 +1,11 @@
-using MotorLang.Parser.Collections;
 using MotorLang.Analysis.Findings;
 using MotorLang.Analysis.Fixes;
 using MotorLang.Analysis.Resolution;
 using MotorLang.Analysis.Sizing;
-using MotorLang.Parser;
+using MotorLang.Parser.Collections;
 using MotorLang.Parser.Diagnostics;
 using MotorLang.Parser.Model;
+using MotorLang.Parser;
 using MotorLang.Sizing;
 
 namespace MotorLang.Analysis;

@@ -1,13 +1,13 @@
-using MotorLang.Parser.Collections;
 using MotorLang.Analysis.Findings;
 using MotorLang.Analysis.Fixes;
 using MotorLang.Analysis.Resolution;
+using MotorLang.Parser.Collections;
 using MotorLang.Parser.Diagnostics;
 using MotorLang.Parser.Model;
 using MotorLang.Parser.Text;
-using MotorLang.Sizing;
 using MotorLang.Sizing.Domain;
 using MotorLang.Sizing.Rules;
+using MotorLang.Sizing;
 
 namespace MotorLang.Analysis.Sizing;
 
