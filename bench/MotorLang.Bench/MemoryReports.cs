@@ -29,9 +29,9 @@ public static class MemoryReports
 
     /// <summary>
     /// `process N path/to/motorlang.dll`: the real server process, started as an editor starts it,
-    /// with an N-motor list open: its resident set after the first diagnostics, after 200 value
-    /// edits, and after four idle seconds (when it gives unused memory back), with the collector's
-    /// own figures. Linux (reads /proc).
+    /// with an N-motor list open: its resident set after the first diagnostics and four idle
+    /// seconds later (when it gives unused memory back), after 200 value edits and again after four
+    /// idle seconds, with the collector's own figures. Linux (reads /proc).
     /// </summary>
     public static async Task Process(int motors, string motorlang)
     {
@@ -50,6 +50,8 @@ public static class MemoryReports
         await client.Open(uri, text);
         await client.DiagnosticsAsync(uri, 1, TimeSpan.FromMinutes(2));
         Console.WriteLine($"after open ({motors} motors): {Resident(process)}; {await Collector(client)}");
+        await Task.Delay(TimeSpan.FromSeconds(4));
+        Console.WriteLine($"after open and 4 s idle: {Resident(process)}; {await Collector(client)}");
         var lengthLines = QuickTiming.LengthLines(text.Split('\n'));
         for (var version = 2; version < 202; version++)
         {
