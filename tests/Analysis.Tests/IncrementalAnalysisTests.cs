@@ -106,6 +106,51 @@ public class IncrementalAnalysisTests
         Assert.True(incremental > steps / 8, $"only {incremental} of {steps} edits were applied incrementally");
     }
 
+    /// <summary>
+    /// A list large enough that the shared tables fold their layers of changes into new bases
+    /// (600 motors, 15 feeders, a chain of 'from', 'like' across feeders), edited many times in a row.
+    /// </summary>
+    [Fact]
+    public void LongRunsOfEditsOnALargerListEqualAFreshAnalysis()
+    {
+        var sb = new StringBuilder("project \"Larger incremental test plant\"\n  ambient 40C\n\n");
+        for (var f = 0; f < 15; f++)
+        {
+            sb.Append($"feeder F-{f} \"Feeder {f}\" 480V 3ph\n").Append(f > 0 && f % 3 != 0 ? $"  from F-{f - 1}\n" : "")
+                .Append($"  length {100 + f * 10}ft\n  wire 4/0 AWG\n");
+            for (var m = 0; m < 40; m++)
+            {
+                var n = f * 40 + m;
+                sb.Append($"  motor M-{n} \"Motor {n}\" {(n % 5 + 1) * 5}hp\n");
+                if (n % 7 == 3 && n > 40) sb.Append($"    like M-{n - 37}\n");
+                sb.Append($"    length {20 + n % 90}ft\n    wire {(n % 3 == 0 ? "10" : "8")} AWG\n    protection inverse-time-breaker {(n % 4 + 3) * 10}A\n\n");
+            }
+        }
+
+        var text = sb.ToString();
+        var lines = text.Split('\n');
+        var valueLines = Enumerable.Range(0, lines.Length).Where(i => lines[i].StartsWith("    length ") || lines[i].StartsWith("    wire ") || lines[i].StartsWith("  motor ")).ToArray();
+        var analysis = Analyzer.Analyze(text);
+        var random = new Random(7);
+        var updated = 0;
+        for (var step = 0; step < 400; step++)
+        {
+            var line = valueLines[random.Next(valueLines.Length)];
+            var content = lines[line];
+            var at = content.LastIndexOf(' ') + 1;
+            lines[line] = content[..at] + random.Next(1, 9) + content[(at + 1)..];
+            var edited = string.Join('\n', lines);
+            var reread = DocumentParser.ReparseLine(analysis.Parse, line, lines[line]);
+            var next = reread is null ? null : Analyzer.Update(analysis, reread);
+            analysis = next ?? Analyzer.Analyze(edited);
+            if (next is not null) updated++;
+            if (step % 40 == 39) Assert.Equal(Describe(Analyzer.Analyze(edited)), Describe(analysis));
+        }
+
+        Assert.Equal(Describe(Analyzer.Analyze(string.Join('\n', lines))), Describe(analysis));
+        Assert.True(updated > 300, $"only {updated} of 400 edits were applied incrementally");
+    }
+
     [Fact]
     public void EditingAMotorValueResizesItAndTheMotorsLikeIt()
     {
