@@ -2,6 +2,10 @@ import { execFile } from "child_process";
 import * as vscode from "vscode";
 import {
   CloseAction,
+  CodeAction,
+  CodeActionKind,
+  CodeActionRequest,
+  CodeActionResolveRequest,
   ErrorAction,
   LanguageClient,
   LanguageClientOptions,
@@ -63,20 +67,25 @@ async function start(context: vscode.ExtensionContext): Promise<void> {
 async function sizeEverything(arg: unknown): Promise<void> {
   const editor = vscode.window.activeTextEditor;
   const target = commandTarget(arg, editor?.document.uri.toString(), editor?.document.languageId);
-  if (!target || !editor) {
+  if (!target || !editor || !client) {
     void vscode.window.showInformationMessage("Open a .motors file to size it.");
     return;
   }
-  // The server offers "size everything" without its edit and computes it on resolve; the last
-  // argument asks VS Code to resolve that one action.
-  const actions = await vscode.commands.executeCommand<vscode.CodeAction[]>(
-    "vscode.executeCodeActionProvider", vscode.Uri.parse(target), new vscode.Range(0, 0, 0, 0), vscode.CodeActionKind.SourceFixAll.value, 1);
-  const action = actions?.find((a) => a.kind?.value === "source.fixAll" && a.edit);
-  if (!action?.edit) {
+  // Asked of the server directly: it offers "size everything" without its edit and fills the edit
+  // in on codeAction/resolve, since computing it re-analyses the whole list.
+  const offered = await client.sendRequest<CodeAction[] | null>(CodeActionRequest.method, {
+    textDocument: { uri: target },
+    range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } },
+    context: { diagnostics: [], only: [CodeActionKind.SourceFixAll] },
+  });
+  let action = offered?.find((a) => a.kind === CodeActionKind.SourceFixAll);
+  if (action && !action.edit) action = await client.sendRequest<CodeAction>(CodeActionResolveRequest.method, action);
+  const edit = await client.protocol2CodeConverter.asWorkspaceEdit(action?.edit);
+  if (!edit) {
     void vscode.window.showInformationMessage("Every size is already written.");
     return;
   }
-  await vscode.workspace.applyEdit(action.edit);
+  await vscode.workspace.applyEdit(edit);
 }
 
 async function showSchedule(context: vscode.ExtensionContext, arg: unknown): Promise<void> {
