@@ -25,7 +25,7 @@ public sealed class EditBuilder(SyntaxTree tree)
         var indent = new string(' ', block.ChildIndent ?? block.Header.Line.IndentWidth + 2);
         if (after.LineEnding.Length == 0)
         {
-            var end = new TextPosition(after.Index, after.Content.Length);
+            var end = new TextPosition(after.Index, after.Length);
             return new TextEdit(new SourceRange(end, end), tree.PreferredLineEnding + indent + statement);
         }
 

@@ -16,6 +16,7 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
 {
     // Reused for every line: a document has one parser and reads one line at a time.
     private readonly List<Item> _items = [];
+    private readonly Dictionary<(string Digits, Unit Unit), object> _quantities = [];
     private Argument?[]?[] _filled = new Argument?[]?[8];
 
     /// <summary>A value made of one token or of a number and its unit written apart ("15 hp", "10 AWG").</summary>
@@ -204,8 +205,19 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
 
                 return new Argument(arg, value == 1 ? Phases.Single : Phases.Three, item.Range, canonical);
             default:
-                return new Argument(arg, new Quantity(value, n.Unit), item.Range, canonical);
+                return new Argument(arg, BoxedQuantity(n, value), item.Range, canonical);
         }
+    }
+
+    /// <summary>
+    /// One boxed quantity per distinct spelling of number and unit: a list repeats the same few
+    /// values thousands of times, and each argument would otherwise hold a box of its own.
+    /// </summary>
+    private object BoxedQuantity(LexicalValue.Number n, decimal value)
+    {
+        var key = (n.Digits, n.Unit);
+        if (!_quantities.TryGetValue(key, out var box)) _quantities[key] = box = new Quantity(value, n.Unit);
+        return box;
     }
 
     private bool CheckRange(KeywordSpec spec, ArgSpec arg, decimal value, Item item)

@@ -1,4 +1,5 @@
 using System.Collections;
+using System.Runtime.InteropServices;
 
 namespace MotorLang.Parser.Syntax;
 
@@ -34,6 +35,26 @@ public sealed class LineList : IReadOnlyList<SyntaxLine>
     }
 
     public int Count { get; }
+
+    /// <summary>Collects lines straight into chunks, so a large document is never held in one big array.</summary>
+    public sealed class Builder
+    {
+        private readonly List<SyntaxLine[]> _chunks = [];
+        private int _count;
+
+        public void Add(SyntaxLine line)
+        {
+            if ((_count & Mask) == 0) _chunks.Add(new SyntaxLine[ChunkSize]);
+            _chunks[^1][_count & Mask] = line;
+            _count++;
+        }
+
+        public LineList ToList()
+        {
+            if (_chunks.Count > 0 && (_count & Mask) != 0) Array.Resize(ref CollectionsMarshal.AsSpan(_chunks)[^1], _count & Mask);
+            return new LineList([.. _chunks], _count);
+        }
+    }
 
     /// <summary>The same as <see cref="Count"/>, for callers that think of the lines as an array.</summary>
     public int Length => Count;

@@ -13,13 +13,14 @@ internal static class LineScanner
 {
     public static LineList Scan(string text, int start, List<Diagnostic> diagnostics)
     {
-        var lines = new List<SyntaxLine>();
+        var lines = new LineList.Builder();
+        SyntaxLine? last = null;
         var pool = new StringPool();
         var tokens = new List<SyntaxToken>();
         var conflictOpen = false;
         var offset = start;
         var index = 0;
-        while (offset < text.Length || (offset == text.Length && (index == 0 || lines[^1].LineEnding.Length > 0)))
+        while (offset < text.Length || (offset == text.Length && (last is null || last.LineEnding.Length > 0)))
         {
             var nl = text.IndexOf('\n', offset);
             int contentEnd, next;
@@ -45,13 +46,13 @@ internal static class LineScanner
 
             var content = text.AsSpan(offset, contentEnd - offset);
             var inConflict = TrackConflict(content, index, ref conflictOpen, diagnostics);
-            lines.Add(ScanLine(text, index, offset, content, ending, inConflict, diagnostics, pool, tokens));
+            lines.Add(last = ScanLine(text, index, offset, content, ending, inConflict, diagnostics, pool, tokens));
             index++;
             if (next > text.Length) break;
             offset = next;
         }
 
-        return LineList.From(lines);
+        return lines.ToList();
     }
 
     /// <summary>Scans one line on its own (its text is the whole source), for re-reading a single edited line.</summary>

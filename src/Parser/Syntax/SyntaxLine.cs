@@ -12,10 +12,17 @@ public enum LineKind { Blank, Comment, Statement, ConflictMarker }
 /// </summary>
 public sealed class SyntaxLine
 {
+    // A list has a hundred thousand lines, so a line keeps only what it needs: its text is a slice
+    // of the document, and the rare comment sits in a small object of its own.
     private readonly string _source;
     private readonly int _start;
     private readonly int _length;
-    private string? _content;
+    private readonly CommentHolder? _comment;
+
+    private sealed class CommentHolder(SyntaxToken token)
+    {
+        public SyntaxToken Token { get; } = token;
+    }
 
     internal SyntaxLine(int index, string source, int start, int length, string lineEnding, int indentWidth, bool indentHasTab,
         ImmutableArray<SyntaxToken> tokens, SyntaxToken? comment, bool inConflict)
@@ -28,14 +35,14 @@ public sealed class SyntaxLine
         IndentWidth = indentWidth;
         IndentHasTab = indentHasTab;
         Tokens = tokens;
-        Comment = comment;
+        _comment = comment is { } c ? new CommentHolder(c) : null;
         InConflict = inConflict;
     }
 
     public int Index { get; }
 
-    /// <summary>The line without its ending. Sliced from the document on first use, to keep parsing light.</summary>
-    public string Content => _content ??= _source.Substring(_start, _length);
+    /// <summary>The line without its ending, as a new string (prefer <see cref="ContentSpan"/>).</summary>
+    public string Content => _source.Substring(_start, _length);
 
     public ReadOnlySpan<char> ContentSpan => _source.AsSpan(_start, _length);
 
@@ -51,7 +58,7 @@ public sealed class SyntaxLine
     /// <summary>Word and string tokens, in order; the comment is separate.</summary>
     public ImmutableArray<SyntaxToken> Tokens { get; }
 
-    public SyntaxToken? Comment { get; }
+    public SyntaxToken? Comment => _comment?.Token;
 
     /// <summary>True for the marker lines and both sides of an unresolved merge conflict.</summary>
     public bool InConflict { get; }
