@@ -17,7 +17,7 @@ public sealed record Step(string Label, string Value, string Rule, string Note)
 /// may be deferred: a value computed for every motor but explained only on hover builds its
 /// explanation when first asked, which keeps a large list's memory down.
 /// </summary>
-public sealed class Result<T> where T : struct
+public sealed class Result<T> : IExplained where T : struct
 {
     // Steps as written, or the function that writes them on first read (then dropped). No Lazy
     // object: analysis makes tens of thousands of results, and most are never explained.
@@ -64,6 +64,17 @@ public sealed class Result<T> where T : struct
     public static Result<T> Deferred(T value, Func<ImmutableArray<Step>> steps) => new(value, steps);
 
     public static Result<T> Missing(string why, params Step[] steps) => new(null, [.. steps], why);
+}
+
+/// <summary>
+/// A result seen without its value type: whether it has a value, and its steps. Lets the rules a
+/// circuit applied be read from every result it carries, whatever the result's type.
+/// </summary>
+public interface IExplained
+{
+    bool HasValue { get; }
+
+    ImmutableArray<Step> Steps { get; }
 }
 
 /// <summary>How values are written in steps. Amperes keep two decimals at most; nothing is rounded in the arithmetic itself.</summary>

@@ -31,8 +31,8 @@ public class ExampleScheduleTests
         // Drop: Ze = 1.2 x 0.85 + 0.063 x 0.527 = 1.0532 ohm/kft; 1.732 x 21 x 1.0532 x 0.09 = 3.45 V = 0.72 % (Chapter 9 Table 9).
         Assert.Equal(
             new ScheduleRow("MCC-B1", "P-101", "Raw milk transfer pump", "15hp", "480 V", "21 A", "10 AWG", "10 AWG", "40 A DE fuse", "35 A DE fuse",
-                "23.13 A", "23 A", "24.15 A, 15 hp", "10 AWG", "10 AWG", "0.72 % (1.37 % total)", "ok"),
-            Row(a, "P-101"));
+                "23.13 A", "23 A", "24.15 A, 15 hp", "10 AWG", "10 AWG", "0.72 % (1.37 % total)", "ok").Cells,
+            Row(a, "P-101").Cells);
 
         // H-201 on a drive: 430.122(A) 125 % x 62 A input = 77.5 A -> 4 AWG (95 x 0.91 = 86.45, 75 C limit 85 A).
         // Ground: 150 A breaker -> 200 A row -> 6 AWG (Table 250.122).

@@ -70,6 +70,29 @@ public sealed class ExecutableTests : IDisposable
     }
 
     [Fact]
+    public void ScheduleJsonMatchesItsSchemaAndSaysWhatIsNotChecked()
+    {
+        var (code, json, _) = Executable.Run(_dir, "schedule", "--format", "json", Example("dairy-bottling.motors"));
+        Assert.Equal(0, code);
+        AssertValid(Path.Combine(Executable.RepoRoot, "docs", "schemas", "schedule.schema.json"), json);
+        var rows = JsonNode.Parse(json)!["Rows"]!.AsArray();
+        string[] Rules(JsonNode row, string list) => row[list]!.AsArray().Select(i => (string)i!["Rule"]!).ToArray();
+        // P-101 is a 15 hp motor across the line, H-201 runs on a drive (starting drive 62A).
+        var p101 = rows.Single(r => (string)r!["Tag"]! == "P-101")!;
+        var h201 = rows.Single(r => (string)r!["Tag"]! == "H-201")!;
+        // Conductors at 125 % of FLC (NFPA 70-2023 430.22); on the drive, 125 % of its rated input (430.122(A)).
+        Assert.Contains("430.22", Rules(p101, "RulesApplied"));
+        Assert.Contains("430.122(A)", Rules(h201, "RulesApplied"));
+        // Short-circuit current ratings (110.10) are never checked; drive overtemperature (430.126) only concerns the drive.
+        Assert.Contains("110.10, 409.22, 430.8", Rules(p101, "NotChecked"));
+        Assert.Contains("430.126", Rules(h201, "NotChecked"));
+        Assert.DoesNotContain("430.126", Rules(p101, "NotChecked"));
+        var feeder = JsonNode.Parse(json)!["Feeders"]![0]!;
+        Assert.Contains("430.24", Rules(feeder, "RulesApplied"));
+        Assert.Contains("430.28, 240.21", Rules(feeder, "NotChecked"));
+    }
+
+    [Fact]
     public void SizeWritesAtomicallyAndDryRunPrintsADiff()
     {
         var path = Path.Combine(_dir, "shop.motors");

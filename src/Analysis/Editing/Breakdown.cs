@@ -1,3 +1,4 @@
+using MotorLang.Analysis.Coverage;
 using MotorLang.Analysis.Sizing;
 using MotorLang.Parser.Model;
 using MotorLang.Parser.Text;
@@ -9,8 +10,11 @@ namespace MotorLang.Analysis.Editing;
 /// <summary>One part of a hover: a heading, the calculation steps, and how the written value compares.</summary>
 public sealed record BreakdownSection(string Heading, IReadOnlyList<Step> Steps, string? Verdict = null);
 
-/// <summary>What to show for a position: a title and the sections that explain it.</summary>
-public sealed record BreakdownView(string Title, IReadOnlyList<BreakdownSection> Sections, SourceRange Range);
+/// <summary>
+/// What to show for a position: a title, the sections that explain it, and, for a whole motor or
+/// feeder, the rules it applied and those it did not check.
+/// </summary>
+public sealed record BreakdownView(string Title, IReadOnlyList<BreakdownSection> Sections, SourceRange Range, CircuitCoverage? Coverage = null);
 
 /// <summary>
 /// The calculation behind whatever is under the cursor: a motor's whole sizing on its header, one
@@ -29,14 +33,22 @@ public static class Breakdown
         var motor = analysis.Motors.Values.FirstOrDefault(m => position.Line >= m.Motor.Header.Line.Index && position.Line <= m.Motor.LastLine);
         if (motor is not null)
         {
-            var sections = keyword == "motor" ? MotorSections(motor).ToList() : MotorSections(motor).Where(s => Belongs(s.Heading, keyword)).ToList();
-            if (sections.Count == 0) sections = MotorSections(motor).ToList();
-            return new BreakdownView($"{motor.Tag} — {motor.Motor.Power?.Value} motor", sections, range);
+            var whole = keyword == "motor";
+            var sections = whole ? MotorSections(motor).ToList() : MotorSections(motor).Where(s => Belongs(s.Heading, keyword)).ToList();
+            if (sections.Count == 0)
+            {
+                sections = MotorSections(motor).ToList();
+                whole = true;
+            }
+
+            // A single line's hover explains that line; the whole motor's says what was and was not checked.
+            return new BreakdownView($"{motor.Tag} — {motor.Motor.Power?.Value} motor", sections, range, whole ? CircuitCoverage.For(motor) : null);
         }
 
         var feeder = analysis.Feeders.Values.FirstOrDefault(f => position.Line >= f.Feeder.Header.Line.Index && position.Line <= f.Feeder.LastOwnLine);
         if (feeder is not null)
-            return new BreakdownView($"{feeder.Tag} — feeder, {Format.Amps(feeder.CalculatedLoad)} running load", FeederSections(feeder).ToList(), range);
+            return new BreakdownView($"{feeder.Tag} — feeder, {Format.Amps(feeder.CalculatedLoad)} running load", FeederSections(feeder).ToList(), range,
+                CircuitCoverage.For(feeder));
         return null;
     }
 

@@ -1,3 +1,4 @@
+using MotorLang.Analysis.Coverage;
 using MotorLang.Analysis.Sizing;
 using MotorLang.Sizing;
 using MotorLang.Sizing.Domain;
@@ -18,6 +19,12 @@ public sealed record ScheduleRow(
         "Overload limit", "Overload", "Disconnect", "Min ground", "Ground", "Voltage drop", "Status",
     ];
 
+    /// <summary>The code rules this motor's sizing applied (from its steps).</summary>
+    public IReadOnlyList<AppliedRule> RulesApplied { get; init; } = [];
+
+    /// <summary>The rules that bear on this motor but that MotorLang does not check.</summary>
+    public IReadOnlyList<NotCheckedNote> NotChecked { get; init; } = [];
+
     public string[] Cells =>
     [
         Feeder, Tag, Description, Power, Volts, Flc, MinimumWire, Wire, MaximumProtection, Protection, OverloadLimit, Overload,
@@ -27,7 +34,20 @@ public sealed record ScheduleRow(
 
 /// <summary>A feeder's totals under its motors.</summary>
 public sealed record FeederTotals(string Tag, string Volts, string CalculatedLoad, string RequiredAmpacity, string MinimumWire,
-    string Wire, string MaximumProtection, string Protection, string MinimumGround, string Ground, string VoltageDrop);
+    string Wire, string MaximumProtection, string Protection, string MinimumGround, string Ground, string VoltageDrop)
+{
+    /// <summary>The code rules this feeder's sizing applied (from its steps).</summary>
+    public IReadOnlyList<AppliedRule> RulesApplied { get; init; } = [];
+
+    /// <summary>The rules that bear on this feeder but that MotorLang does not check.</summary>
+    public IReadOnlyList<NotCheckedNote> NotChecked { get; init; } = [];
+}
+
+/// <summary>A rule not checked on a circuit, as the schedule reports it: the rule, what it covers, and why it is not checked.</summary>
+public sealed record NotCheckedNote(string Rule, string Text, string Reason)
+{
+    public static IReadOnlyList<NotCheckedNote> Of(IReadOnlyList<NotCheckedRule> rules) => rules.Select(r => new NotCheckedNote(r.Rule, r.Text, r.Reason)).ToList();
+}
 
 /// <summary>The motor schedule of a document: one row per motor, then each feeder's totals.</summary>
 public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<FeederTotals> Feeders)
@@ -55,14 +75,22 @@ public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<Fee
             m.Disconnect?.Value is { } d ? $"{Format.Amps(d.MinimumAmps)}, {Numbers.Horsepower(d.MinimumHorsepower)} hp" : "",
             m.MinimumGround?.Value?.ToString() ?? "", m.Ground?.ToString() ?? "",
             m.BranchDrop?.Value is { } drop ? $"{drop.Percent:0.##} %" + (m.TotalDropPercent is { } t && t != drop.Percent ? $" ({t:0.##} % total)" : "") : "",
-            status);
+            status)
+        {
+            RulesApplied = Coverage.RulesApplied.Of(m),
+            NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(m)),
+        };
     }
 
     private static FeederTotals Totals(FeederResult f) => new(
         f.Tag, f.Volts > 0 ? $"{Format.Number(f.Volts)} V" : "", Format.Amps(f.CalculatedLoad), Amps(f.RequiredAmpacity),
         Text(f.MinimumWire), f.Wire?.ToString() ?? "", Amps(f.MaximumProtection),
         f.ProtectionRating is { } p ? Format.Amps(p) : "", f.MinimumGround?.Value?.ToString() ?? "", f.Ground?.ToString() ?? "",
-        f.Drop?.Value is { } d ? $"{d.Percent:0.##} %" : "");
+        f.Drop?.Value is { } d ? $"{d.Percent:0.##} %" : "")
+    {
+        RulesApplied = Coverage.RulesApplied.Of(f),
+        NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(f)),
+    };
 
     private static string Protection(MotorResult m) =>
         m.MaximumProtection?.Value is { } max ? $"{Format.Amps(m.Device == ProtectiveDevice.InstantaneousTripBreaker ? decimal.Floor(max) : max)} {Short(m.Device)}" : "";

@@ -29,6 +29,8 @@ public sealed class MotorResult(MotorNode motor)
     public decimal Volts { get; internal set; }
     public Phases Phases { get; internal set; }
     public int Quantity { get; internal set; } = 1;
+    /// <summary>How the motor is started (a drive brings the drive items into what is not checked).</summary>
+    public StartingMethod StartingMethod { get; internal set; } = StartingMethod.FullVoltage;
     public Result<decimal> FullLoadCurrent { get; internal set; } = Result<decimal>.Missing("not computed");
     public Result<decimal>? RequiredAmpacity { get; internal set; }
     public Result<WireSpec>? MinimumWire { get; internal set; }

@@ -40,6 +40,7 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         r.Volts = systemVolts.Value.Value;
         r.Phases = phases;
         r.Quantity = Get(motor, m => m.Quantity)?.Value ?? 1;
+        r.StartingMethod = Get(motor, m => m.Starting)?.Value ?? StartingMethod.FullVoltage;
         if (!CheckVoltage(motor, ratedVolts, phases, systemVolts.Value.Value, systemPhases.Value)) return r;
 
         var kind = Get(motor, m => m.Kind)?.Value ?? (phases == Phases.Dc ? MotorKind.Dc : MotorKind.Induction);

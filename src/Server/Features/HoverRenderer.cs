@@ -1,4 +1,5 @@
 using System.Text;
+using MotorLang.Analysis.Coverage;
 using MotorLang.Analysis.Editing;
 
 namespace MotorLang.Server.Features;
@@ -23,7 +24,19 @@ public static class HoverRenderer
             if (section.Verdict is { } v) sb.Append('\n').Append(Escape(v)).Append('\n');
         }
 
+        if (view.Coverage is { } coverage) AppendCoverage(sb, coverage);
         return sb.ToString();
+    }
+
+    /// <summary>One line of the rules applied, then a short list of what was not checked (the reasons are in docs/checks.md).</summary>
+    private static void AppendCoverage(StringBuilder sb, CircuitCoverage coverage)
+    {
+        sb.Append("\n---\n");
+        if (coverage.Applied.Count > 0)
+            sb.Append("\n**Checked:** ").Append(Escape(string.Join(", ", coverage.Applied.Select(a => a.Rule)))).Append('\n');
+        if (coverage.NotChecked.Count == 0) return;
+        sb.Append("\n**Not checked:**\n\n");
+        foreach (var n in coverage.NotChecked) sb.Append("- ").Append(Escape(n.Rule)).Append(": ").Append(Escape(n.Text)).Append('\n');
     }
 
     private static string Escape(string s) => s.Replace("|", "\\|").Replace("*", "\\*").Replace("_", "\\_");

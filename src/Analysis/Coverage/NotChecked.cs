@@ -1,0 +1,84 @@
+using System.Collections.Immutable;
+using MotorLang.Analysis.Sizing;
+using MotorLang.Sizing.Domain;
+
+namespace MotorLang.Analysis.Coverage;
+
+/// <summary>Which circuits a rule MotorLang does not check concerns.</summary>
+public enum Reach
+{
+    /// <summary>Every motor branch circuit and every feeder.</summary>
+    EveryCircuit,
+    EveryMotor,
+    /// <summary>Motors written with <c>starting drive</c>.</summary>
+    DriveFedMotor,
+    EveryFeeder,
+}
+
+/// <summary>A rule that bears on a circuit but that MotorLang does not check: the rule, what it covers (one line), and why it is left out.</summary>
+public sealed record NotCheckedRule(string Rule, string Text, string Reason, Reach Reach);
+
+/// <summary>
+/// The one table of what MotorLang does not check, filtered by what applies to a circuit. docs/checks.md
+/// ("What MotorLang does not check") lists every row; a test keeps the two the same.
+/// </summary>
+public static class NotChecked
+{
+    private const string NoFaultCurrent = "the list carries no available fault current and no equipment ratings";
+
+    public static readonly ImmutableArray<NotCheckedRule> All =
+    [
+        new("110.10, 409.22, 430.8", "equipment short-circuit current ratings against the available fault current", NoFaultCurrent, Reach.EveryCircuit),
+        new("110.9", "interrupting ratings of the breakers and fuses", NoFaultCurrent, Reach.EveryCircuit),
+        new("110.3(B)", "listing and labeling instructions, such as the largest fuse or breaker a starter or drive is listed with",
+            "MotorLang holds no product data; a listing may set tighter limits than the code tables", Reach.EveryCircuit),
+        new("90.4", "local amendments and the rulings of the authority having jurisdiction",
+            "MotorLang knows only NFPA 70-2023 as published", Reach.EveryCircuit),
+        new("310.10", "whether the insulation suits the location (dry, damp, wet, sunlight)",
+            "the list does not say where the wiring runs", Reach.EveryCircuit),
+        new("Articles 500–516", "equipment and wiring in hazardous (classified) locations",
+            "the list does not say where the equipment is", Reach.EveryCircuit),
+        new("430.72–430.75", "motor control circuits: their conductors, protection and disconnection",
+            "control wiring is not part of the list", Reach.EveryMotor),
+        new("Article 440", "hermetic refrigerant motor-compressors (sized from rated-load and branch-circuit selection current)",
+            "every motor is sized under Article 430; a motor-compressor needs the Article 440 rules", Reach.EveryMotor),
+        new("430.52(C)(1)(b), 430.32(C)", "whether the motor actually starts with the device and overload chosen",
+            "that needs the motor's acceleration and the devices' trip curves; MotorLang checks only the code limits", Reach.EveryMotor),
+        new("430.102", "where the disconnect is: in sight of the controller and of the motor",
+            "the list does not record where equipment is mounted", Reach.EveryMotor),
+        new("430.37", "the number and placement of overload units",
+            "MotorLang checks an overload's rating, not how many units there are or which conductors they are in", Reach.EveryMotor),
+        new("430.126", "motor overtemperature protection when the drive runs the motor at reduced speed",
+            "it depends on the drive's and the motor's own protection features, which the list does not carry", Reach.DriveFedMotor),
+        new("430.130, 110.3(B)", "the branch device type and largest rating marked on the drive",
+            "MotorLang holds no drive data; it checks the 430.52 limit only", Reach.DriveFedMotor),
+        new("430.131", "several motors supplied by one drive",
+            "MotorLang sizes each motor as if it had its own drive", Reach.DriveFedMotor),
+        new("430.28, 240.21", "feeder taps", "the list has no tap conductors", Reach.EveryFeeder),
+        new("450.3", "transformer overcurrent protection", "transformers are not part of the list", Reach.EveryFeeder),
+        new("215.10, 240.13", "ground-fault protection of equipment for feeder devices of 1000 A or more",
+            "the list does not say whether the feeder device has ground-fault protection", Reach.EveryFeeder),
+        new("Article 220", "load calculation and demand factors for the non-motor loads",
+            "loads are added at the amperes or kVA written", Reach.EveryFeeder),
+        new("Article 230", "service conductors and service equipment",
+            "every feeder is sized as a feeder, including one written without 'from'", Reach.EveryFeeder),
+    ];
+
+    /// <summary>What is not checked on a motor's branch circuit.</summary>
+    public static IReadOnlyList<NotCheckedRule> For(MotorResult motor) =>
+        All.Where(r => r.Reach is Reach.EveryCircuit or Reach.EveryMotor
+                       || (r.Reach == Reach.DriveFedMotor && motor.StartingMethod == StartingMethod.Drive)).ToList();
+
+    /// <summary>What is not checked on a feeder.</summary>
+    public static IReadOnlyList<NotCheckedRule> For(FeederResult feeder) =>
+        All.Where(r => r.Reach is Reach.EveryCircuit or Reach.EveryFeeder).ToList();
+
+    /// <summary>How docs/checks.md names a reach.</summary>
+    public static string Describe(Reach reach) => reach switch
+    {
+        Reach.EveryCircuit => "every motor and feeder",
+        Reach.EveryMotor => "every motor",
+        Reach.DriveFedMotor => "motors fed by a drive",
+        _ => "every feeder",
+    };
+}
