@@ -198,4 +198,63 @@ public class FindingTests
         Assert.Equal("14:10-14:11 M102", Describe(findings[1]));
         Assert.Contains("inherited from M", findings[1].Message);
     }
+
+    // NFPA 70-2023 430.62(A) Exception No. 1: an instantaneous-trip branch breaker counts at the Table 430.52(C)(1)
+    // percentage for the feeder's device type. Base motor 14 A (Table 430.250, 10 hp 480 V), squirrel cage not design B premium:
+    // inverse-time breaker feeder: 250 % x 14 = 35 A -> 35 A (a standard rating, 240.6(A)); dual-element fuse feeder:
+    // 175 % x 14 = 24.5 A -> 20 A (rounded down). At its instantaneous setting (800 % x 14 = 112 A) the limit would be 110 A.
+    [Theory]
+    [InlineData("  protection inverse-time-breaker 35A", 35)]
+    [InlineData("  protection dual-element-fuse 20A", 20)]
+    public void InstantaneousTripBranchBreakersCountAtTheAssumedRatingOnTheFeeder(string feederProtection, int expected)
+    {
+        var lines = Base.ToList();
+        lines[3] = feederProtection;
+        lines[10] = "    protection instantaneous-trip-breaker 100A";
+        var a = Analyzer.Analyze(Text([.. lines]));
+        var feeder = a.Feeders.Values.Single();
+        Assert.Equal(expected, feeder.MaximumProtection!.Value);
+        Assert.Contains(feeder.MaximumProtection.Steps, s => s.Rule == "NEC 430.62(A) Exception No. 1");
+        Assert.DoesNotContain(a.Findings, f => f.Code == FindingCodes.FeederProtectionTooLarge);
+    }
+
+    [Fact]
+    public void M215_FeederDeviceNotSized()
+    {
+        // 430.52(C)(3): an instantaneous-trip breaker is permitted only in a listed combination controller on a motor branch.
+        var text = With(3, "  protection instantaneous-trip-breaker 60A");
+        var f = Single(text, FindingCodes.FeederDeviceNotSized);
+        Assert.Equal("4:14-4:40 M215", Describe(f));
+        Assert.Equal(Severity.Warning, f.Severity);
+        Assert.Null(f.Fix);
+        var a = Analyzer.Analyze(text);
+        Assert.Null(a.Feeders.Values.Single().MaximumProtection!.Value);
+        Assert.DoesNotContain(a.Findings, x => x.Code == FindingCodes.FeederProtectionTooLarge);
+    }
+
+    [Fact]
+    public void ALoadWithNoCurrentLeavesItsFeederUnsizedAndSaysSo()
+    {
+        // 430.24(3) and (4) add every other load; one without amperes or kVA cannot be added, so no feeder size is given.
+        var text = Text([.. Base, "  load L-1 \"Heaters\""]);
+        var a = Analyzer.Analyze(text);
+        var warnings = a.Findings.Where(f => f.Code == FindingCodes.CannotCheck).Select(Describe).ToList();
+        Assert.Contains("13:3-13:7 M204", warnings);
+        Assert.Contains("1:1-1:7 M204", warnings);
+        var feeder = a.Feeders.Values.Single();
+        Assert.Null(feeder.RequiredAmpacity);
+        Assert.Null(feeder.MaximumProtection);
+    }
+
+    [Fact]
+    public void AWireWithNoAmpacityAtThisAmbientIsNotPassedInSilence()
+    {
+        // Table 310.15(B)(1)(1): the 75 C column has no factor above 70 C ambient, so no 75 C conductor has an ampacity at 75 C.
+        var text = Text(["project \"P\"", "  ambient 75C", .. Base]);
+        var a = Analyzer.Analyze(text);
+        var cannot = a.Findings.Where(f => f.Code == FindingCodes.CannotCheck).ToList();
+        Assert.Contains(cannot, f => Describe(f) == "11:10-11:16 M204" && f.Message.Contains("75 °C ambient"));
+        Assert.Contains(cannot, f => Describe(f) == "4:8-4:13 M204");
+        Assert.DoesNotContain(a.Findings, f => f.Code is FindingCodes.WireUndersized or FindingCodes.FeederWireUndersized);
+    }
 }

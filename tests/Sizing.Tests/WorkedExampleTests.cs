@@ -239,6 +239,20 @@ public class WorkedExampleTests
         Assert.Equal(ConductorSize.Parse("10"), Grounding.Minimum(200m, ConductorMaterial.Copper, WireSpec.Single(ConductorSize.Parse("10"))).Value);
     }
 
+    // 250.122(B) with no size large enough. Table 250.122: 6000 A -> 800 kcmil Cu. Phase conductors 10 sets of 2000 kcmil
+    // (20 000 000 cmil) where 2 sets of 1/0 (2 x 105 600 = 211 200 cmil) would do: ratio 94.7, so the grounding conductor
+    // would need 800 000 x 94.7 = 75.8 million cmil, beyond 2000 kcmil: no size is given rather than the unincreased 800 kcmil.
+    // A single 2000 kcmil set over a 1/0 minimum needs 15.2 million cmil too, but 250.122(A) caps it at the phase conductor.
+    [Fact]
+    public void GroundingConductorIncreaseBeyondTheLargestSizeIsNotGuessed()
+    {
+        var parallel = Grounding.Minimum(6000m, ConductorMaterial.Copper, new WireSpec(10, ConductorSize.Parse("2000")), new WireSpec(2, ConductorSize.Parse("1/0")));
+        Assert.Null(parallel.Value);
+        Assert.Contains("250.122(B)", parallel.Unavailable);
+        var single = Grounding.Minimum(6000m, ConductorMaterial.Copper, WireSpec.Single(ConductorSize.Parse("2000")), WireSpec.Single(ConductorSize.Parse("1/0")));
+        Assert.Equal(ConductorSize.Parse("2000"), single.Value);
+    }
+
     // 250.122(D)(2): instantaneous-trip breaker -> size from the dual-element fuse 430.52 would allow.
     // Hand calculation: 14 A motor, 175 % = 24.5 A -> 25 A fuse -> 10 AWG Cu (60 A row).
     [Fact]

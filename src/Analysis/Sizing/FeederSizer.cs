@@ -35,12 +35,26 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
             return r;
         }
 
-        var feederMotors = motorResults.Select(m => new FeederMotor(m.Tag, m.FullLoadCurrent.Value!.Value, m.MaximumProtection?.Value, m.Quantity, m.DutyCycleAmps)).ToList();
+        // A load with no current would be left out of the sum: then nothing on the feeder is sized.
+        var unknownLoads = supplied.SelectMany(f => f.Loads).Where(l => l.Current is null && l.ApparentPower is null).ToList();
+        if (unknownLoads.Count > 0)
+        {
+            foreach (var load in unknownLoads.Where(l => l.Feeder == feeder))
+                Add(FindingCodes.CannotCheck, Severity.Warning, load.Header.KeywordToken.Range,
+                    "the load has no current or kVA, so its feeder cannot be sized (NEC 430.24(3), (4)): write its amperes, e.g. 'load L-1 \"Heaters\" 12A'");
+            Add(FindingCodes.CannotCheck, Severity.Warning, feeder.Header.KeywordToken.Range,
+                $"the feeder cannot be sized: {string.Join(", ", unknownLoads.Select(l => l.Tag?.Value ?? "a load"))} has no current or kVA");
+            return r;
+        }
+
+        var device = feeder.Protection?.Value ?? ProtectiveDevice.InverseTimeBreaker;
+        var feederMotors = motorResults.Select(m => AsFeederMotor(m, device)).ToList();
         var loads = supplied.SelectMany(f => f.Loads).Select(l => LoadOf(l, r.Volts, r.Phases)).OfType<FeederLoad>().ToList();
         r.CalculatedLoad = feederMotors.Sum(m => m.FullLoadAmps * m.Quantity) + loads.Sum(l => l.Amps);
         r.RequiredAmpacity = Feeders.RequiredAmpacity(feederMotors, loads);
-        var device = feeder.Protection?.Value ?? ProtectiveDevice.InverseTimeBreaker;
-        r.MaximumProtection = Feeders.MaximumProtection(feederMotors, loads, fuse: device is ProtectiveDevice.DualElementFuse or ProtectiveDevice.NonTimeDelayFuse);
+        r.MaximumProtection = device == ProtectiveDevice.InstantaneousTripBreaker
+            ? Result<decimal>.Missing("an instantaneous-trip breaker is not a feeder protective device MotorLang can size (430.52(C)(3) permits one only in a listed combination motor controller on a motor branch circuit)")
+            : Feeders.MaximumProtection(feederMotors, loads, fuse: device is ProtectiveDevice.DualElementFuse or ProtectiveDevice.NonTimeDelayFuse);
         r.ProtectionRating = feeder.ProtectionRating?.Value.Value;
         var required = r.RequiredAmpacity.Value!.Value;
         if (required > 0) r.MinimumWire = cache.MinimumWire(required, settings.Conditions, false);
@@ -52,12 +66,30 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
         return r;
     }
 
+    /// <summary>
+    /// A motor as the feeder sees it. An instantaneous-trip branch breaker counts at the rating 430.62(A)
+    /// Exception No. 1 assumes for the feeder's device type, never at its instantaneous setting.
+    /// </summary>
+    private static FeederMotor AsFeederMotor(MotorResult m, ProtectiveDevice feederDevice)
+    {
+        var flc = m.FullLoadCurrent.Value!.Value;
+        if (m.Device == ProtectiveDevice.InstantaneousTripBreaker && m.ProtectionBasis is { } basis && feederDevice != ProtectiveDevice.InstantaneousTripBreaker)
+        {
+            var (amps, why) = Feeders.AssumedInstantaneousTrip(basis, feederDevice);
+            return new FeederMotor(m.Tag, flc, amps, m.Quantity, m.DutyCycleAmps, why);
+        }
+
+        return new FeederMotor(m.Tag, flc, m.MaximumProtection?.Value, m.Quantity, m.DutyCycleAmps);
+    }
+
     /// <summary>Voltage drop along the feeder at its running load (with its wire, or the minimum when none is given).</summary>
     private void Drop(FeederResult r, Settings settings)
     {
         var wire = r.Wire ?? r.MinimumWire?.Value;
         if (r.Feeder.Length is not { } length || wire is null || r.CalculatedLoad == 0) return;
         r.Drop = VoltageDrop.Of(r.CalculatedLoad, Conversions.Feet(length.Value), wire.Value, r.Volts, r.Phases, settings.Material, settings.Raceway, settings.PowerFactor);
+        if (r.Drop.Unavailable is { } why)
+            Add(FindingCodes.CannotCheck, Severity.Warning, length.Range, $"the feeder voltage drop cannot be worked out: {why}");
     }
 
     /// <summary>Drop from the source to this feeder's load end: its own and that of each feeder it is supplied from.</summary>
@@ -86,20 +118,45 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
                 Add(FindingCodes.NotWritten, Severity.Information, feeder.Header.KeywordToken.Range,
                     $"no feeder wire given; NEC 430.24 needs {Format.Amps(required)}: {min}",
                     new Fix("Add the minimum feeder wire", [edits.Insert(feeder, $"wire {min}")]));
+            else if (r.MinimumWire is { Unavailable: { } none })
+                Add(FindingCodes.CannotCheck, Severity.Warning, feeder.Header.KeywordToken.Range,
+                    $"no feeder conductor can be chosen for {Format.Amps(required)}: {none}");
             return;
         }
 
         r.Wire = wire.Value;
         r.WireAmpacity = cache.Allowable(wire.Value, settings.Conditions, false);
-        if (r.WireAmpacity.Value is { } allowable && allowable < required && r.MinimumWire?.Value is { } minimum)
+        if (r.WireAmpacity.Value is not { } allowable)
+        {
+            if (required > 0)
+                Add(FindingCodes.CannotCheck, Severity.Warning, wire.Range,
+                    $"feeder wire {wire.Value} cannot be checked against the {Format.Amps(required)} NEC 430.24 requires: {r.WireAmpacity.Unavailable}");
+            return;
+        }
+
+        if (allowable >= required) return;
+        if (r.MinimumWire?.Value is { } minimum)
             Add(FindingCodes.FeederWireUndersized, Severity.Error, wire.Range,
                 $"feeder wire {wire.Value} carries {Format.Amps(allowable)} here; NEC 430.24 requires {Format.Amps(required)}: use {minimum}",
                 new Fix($"Change the feeder wire to {minimum}", [EditBuilder.Replace(feeder.Statement("wire")!.Arg("size")!, minimum.ToString())]));
+        else
+            Add(FindingCodes.FeederWireUndersized, Severity.Error, wire.Range,
+                $"feeder wire {wire.Value} carries {Format.Amps(allowable)} here; NEC 430.24 requires {Format.Amps(required)}, and {r.MinimumWire?.Unavailable}");
     }
 
     private void CheckProtection(FeederNode feeder, FeederResult r)
     {
-        if (r.MaximumProtection?.Value is not { } max) return;
+        if (r.MaximumProtection?.Value is not { } max)
+        {
+            if (feeder.Protection?.Value == ProtectiveDevice.InstantaneousTripBreaker)
+                Add(FindingCodes.FeederDeviceNotSized, Severity.Warning, feeder.Protection.Range,
+                    $"feeder protection is not checked: {r.MaximumProtection?.Unavailable}");
+            else if (r.MaximumProtection is { Unavailable: { } why } && r.RequiredAmpacity?.Value > 0) // an empty feeder has nothing to protect
+                Add(FindingCodes.CannotCheck, Severity.Warning, feeder.Protection?.Range ?? feeder.Header.KeywordToken.Range,
+                    $"the feeder protection cannot be checked: {why} (NEC 430.62(A))");
+            return;
+        }
+
         var text = $"{Format.Number(max)}A";
         if (feeder.Protection is null)
         {
@@ -131,7 +188,12 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
         // (common practice, no source). Anything larger counts as upsized.
         var baseline = cache.MinimumWire(Math.Max(r.RequiredAmpacity?.Value ?? 0, device), settings.Conditions, false).Value;
         r.MinimumGround = Grounding.Minimum(device, settings.Material, r.Wire ?? r.MinimumWire?.Value, baseline, "NEC 250.122(A)");
-        if (r.MinimumGround.Value is not { } min) return;
+        if (r.MinimumGround.Value is not { } min)
+        {
+            Add(FindingCodes.CannotCheck, Severity.Warning, feeder.Ground?.Range ?? feeder.Header.KeywordToken.Range,
+                $"the feeder grounding conductor cannot be sized: {r.MinimumGround.Unavailable} (NEC 250.122)");
+            return;
+        }
         if (feeder.Ground is not { } ground)
         {
             Add(FindingCodes.NotWritten, Severity.Information, feeder.Header.KeywordToken.Range,

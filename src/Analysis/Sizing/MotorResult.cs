@@ -39,6 +39,8 @@ public sealed class MotorResult(MotorNode motor)
     public ProtectiveDevice Device { get; internal set; } = ProtectiveDevice.InverseTimeBreaker;
     public decimal? ProtectionRating { get; internal set; }
     public Result<decimal>? MaximumProtection { get; internal set; }
+    /// <summary>What the 430.52 maximum was worked out from (a feeder reads it for 430.62(A) Exception No. 1).</summary>
+    internal ProtectionInput? ProtectionBasis { get; set; }
     public decimal? Overload { get; internal set; }
     public Result<decimal>? OverloadLimit { get; internal set; }
     public Result<decimal>? OverloadAbsoluteLimit { get; internal set; }

@@ -135,17 +135,30 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
             if (r.MinimumWire?.Value is { } min)
                 Add(FindingCodes.NotWritten, Severity.Information, motor.Header.KeywordToken.Range,
                     $"no wire given; NEC 430.22 needs {Format.Amps(required)}: {min}", Insert(motor, $"wire {min}", "Add the minimum wire size"));
+            else
+                Add(FindingCodes.CannotCheck, Severity.Warning, motor.Header.KeywordToken.Range,
+                    $"no branch conductor can be chosen for {Format.Amps(required)}: {r.MinimumWire?.Unavailable}");
             return;
         }
 
         r.Wire = wire.Value;
         r.WireAmpacity = cache.Allowable(wire.Value, conditions, designBcd);
-        if (r.WireAmpacity.Value is { } allowable && allowable < required && r.MinimumWire?.Value is { } minimum)
+        if (r.WireAmpacity.Value is not { } allowable)
         {
+            // A wire whose ampacity the tables cannot give is never passed in silence.
+            Add(FindingCodes.CannotCheck, Severity.Warning, RangeOn(motor, owner, wire.Range),
+                $"wire {wire.Value} cannot be checked against the {Format.Amps(required)} NEC 430.22 requires: {r.WireAmpacity.Unavailable}");
+            return;
+        }
+
+        if (allowable >= required) return;
+        if (r.MinimumWire?.Value is { } minimum)
             Add(FindingCodes.WireUndersized, Severity.Error, RangeOn(motor, owner, wire.Range),
                 $"wire {wire.Value} carries {Format.Amps(allowable)} here; NEC 430.22 requires {Format.Amps(required)}: use {minimum}",
                 ReplaceOrOverride(motor, owner, "wire", "size", minimum.ToString(), $"Change the wire to {minimum}"));
-        }
+        else
+            Add(FindingCodes.WireUndersized, Severity.Error, RangeOn(motor, owner, wire.Range),
+                $"wire {wire.Value} carries {Format.Amps(allowable)} here; NEC 430.22 requires {Format.Amps(required)}, and {r.MinimumWire?.Unavailable}");
     }
 
     private void CheckProtection(MotorNode motor, MotorResult r, decimal flc, Phases phases, MotorKind kind, DesignLetter? design, Efficiency efficiency)
@@ -155,8 +168,14 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         r.Device = device?.Value ?? ProtectiveDevice.InverseTimeBreaker;
         r.ProtectionRating = rating?.Value.Value;
         var hardStart = Likes.Has(motor, model, m => m.HardStart);
-        r.MaximumProtection = cache.MaximumProtection(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency, hardStart));
-        if (r.MaximumProtection.Value is not { } max) return;
+        r.ProtectionBasis = new ProtectionInput(flc, r.Device, phases, kind, design, efficiency, hardStart);
+        r.MaximumProtection = cache.MaximumProtection(r.ProtectionBasis.Value);
+        if (r.MaximumProtection.Value is not { } max)
+        {
+            Add(FindingCodes.CannotCheck, Severity.Warning, device is null ? motor.Header.KeywordToken.Range : RangeOn(motor, deviceOwner, device.Range),
+                $"the short-circuit and ground-fault protection cannot be checked: {r.MaximumProtection.Unavailable} (NEC 430.52)");
+            return;
+        }
         var deviceName = ShortCircuitProtection.DeviceName(r.Device);
         var unit = r.Device == ProtectiveDevice.InstantaneousTripBreaker ? "setting" : "rating";
         // Written only when a finding needs it: most motors are correct, and this runs for each.
@@ -242,8 +261,12 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
     {
         r.Disconnect = cache.Disconnect(flc, r.Horsepower);
         r.Controller = cache.Controller(r.Horsepower);
-        (r.NemaStarter, var size) = cache.Nema(r.Horsepower, r.Volts);
-        r.NemaStarterSize = r.NemaStarter.HasValue ? size : null;
+        // The NEMA sizes carried are those of polyphase ac starters: no suggestion for a single-phase or dc motor.
+        if (r.Phases == Phases.Three)
+        {
+            (r.NemaStarter, var size) = cache.Nema(r.Horsepower, r.Volts);
+            r.NemaStarterSize = r.NemaStarter.HasValue ? size : null;
+        }
         var need = r.Disconnect.Value!.Value;
         if (Get(motor, m => m.DisconnectRating, out var ampsOwner) is { } amps && amps.Value.Value < need.MinimumAmps)
             Add(FindingCodes.DisconnectTooSmall, Severity.Error, RangeOn(motor, ampsOwner, amps.Range),
@@ -266,9 +289,16 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
             r.MinimumGround = cache.GroundForInstantaneousTrip(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency), material, r.Wire ?? phaseMinimum, phaseMinimum);
         else if ((r.ProtectionRating ?? r.MaximumProtection?.Value) is { } device)
             r.MinimumGround = cache.Ground(device, material, r.Wire ?? phaseMinimum, phaseMinimum, "NEC 250.122(D)(1)");
-        if (r.MinimumGround?.Value is not { } min) return;
-
         var ground = Get(motor, m => m.Ground, out var owner);
+        if (r.MinimumGround?.Value is not { } min)
+        {
+            // No device to size from is already reported with the protection; a table that stops is said here.
+            if (r.MinimumGround is { Unavailable: { } why })
+                Add(FindingCodes.CannotCheck, Severity.Warning, ground is null ? motor.Header.KeywordToken.Range : RangeOn(motor, owner, ground.Range),
+                    $"the grounding conductor cannot be sized: {why} (NEC 250.122)");
+            return;
+        }
+
         if (ground is null)
         {
             Add(FindingCodes.NotWritten, Severity.Information, motor.Header.KeywordToken.Range,
@@ -293,6 +323,9 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         var lockedRotor = r.LockedRotorFromCodeLetter?.Value is { } range ? range.Maximum ?? range.Minimum : r.LockedRotorTableMaximum?.Value;
         if (lockedRotor is { } lra)
             r.Starting = new StartingDropInput(lra, Conversions.Feet(length.Value), wire.Value, r.Volts, r.Phases, settings.Material, settings.Raceway);
+        if (r.BranchDrop.Unavailable is { } noDrop)
+            Add(FindingCodes.CannotCheck, Severity.Warning, Get(motor, m => m.Length)?.Range ?? motor.Header.KeywordToken.Range,
+                $"the branch voltage drop cannot be worked out: {noDrop}");
         if (r.BranchDrop.Value is { } drop && drop.Percent > settings.BranchDropLimit)
             Add(FindingCodes.VoltageDropHigh, Severity.Warning, (Get(motor, m => m.Wire) ?? null)?.Range ?? motor.Header.KeywordToken.Range,
                 $"branch voltage drop {drop.Percent:0.##} % is above the {Format.Percent(settings.BranchDropLimit)} limit (NEC 210.19 Informational Note No. 4)");

@@ -134,7 +134,9 @@ public static class Ampacity
             if (AllowableAmps(wire, c, designBcdMotor) >= required) return Chosen(wire, required, Allowable(wire, c, designBcdMotor));
         }
 
-        return Result<WireSpec>.Missing($"no conductor arrangement up to 10 parallel sets carries {Format.Amps(required)}");
+        // Say why when no wire has an ampacity at all here (too hot an ambient for the insulation).
+        var why = Allowable(WireSpec.Single(start), c, designBcdMotor).Unavailable;
+        return Result<WireSpec>.Missing(string.IsNullOrEmpty(why) ? $"no conductor arrangement up to 10 parallel sets carries {Format.Amps(required)}" : why);
     }
 
     private static Result<WireSpec> Chosen(WireSpec wire, decimal required, Result<decimal> allowable) =>

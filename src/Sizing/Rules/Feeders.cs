@@ -1,3 +1,4 @@
+using MotorLang.Sizing.Domain;
 using MotorLang.Sizing.Tables;
 
 namespace MotorLang.Sizing.Rules;
@@ -5,9 +6,11 @@ namespace MotorLang.Sizing.Rules;
 /// <summary>
 /// One motor as the feeder sees it: its table full-load current (430.17 compares motors by it),
 /// the largest branch device 430.52 permits for it, and how many identical motors it stands for.
+/// <paramref name="BranchDeviceBasis"/> says how that device figure was found when it is not the
+/// 430.52 maximum itself (an instantaneous-trip breaker counts at an assumed rating, 430.62(A) Exception No. 1).
 /// </summary>
 public sealed record FeederMotor(string Tag, decimal FullLoadAmps, decimal? BranchDeviceMaximum, int Quantity = 1,
-    decimal? DutyCycleAmps = null);
+    decimal? DutyCycleAmps = null, string? BranchDeviceBasis = null);
 
 /// <summary>A non-motor load on a feeder.</summary>
 public sealed record FeederLoad(string Tag, decimal Amps, bool Continuous);
@@ -75,7 +78,9 @@ public static class Feeders
         if (largest is not null)
         {
             total += largest.BranchDeviceMaximum!.Value;
-            steps.Add(Step.Amps("Largest branch device", largest.BranchDeviceMaximum.Value, "NEC 430.62(A)", $"{largest.Tag}, at its 430.52 maximum"));
+            steps.Add(largest.BranchDeviceBasis is { } basis
+                ? Step.Amps("Largest branch device", largest.BranchDeviceMaximum.Value, "NEC 430.62(A) Exception No. 1", $"{largest.Tag}, {basis}")
+                : Step.Amps("Largest branch device", largest.BranchDeviceMaximum.Value, "NEC 430.62(A)", $"{largest.Tag}, at its 430.52 maximum"));
             var others = units.Where(u => !ReferenceEquals(u, largest)).Sum(u => u.FullLoadAmps);
             if (others > 0)
             {
@@ -96,6 +101,19 @@ public static class Feeders
         steps.Add(Step.Amps("Maximum feeder protection", rating.Value, "NEC 430.62(A), 240.6(A)",
             $"{Format.Amps(total)} rounded down to a standard rating"));
         return new Result<decimal>(rating, [.. steps]);
+    }
+
+    /// <summary>
+    /// 430.62(A) Exception No. 1: for the feeder calculation an instantaneous-trip branch breaker is assumed
+    /// to be rated no more than the Table 430.52(C)(1) percentage for the type of feeder device employed.
+    /// "Not exceeding" that percentage: the product itself, with no next-size-up (the conservative reading).
+    /// </summary>
+    public static (decimal Amps, string Basis) AssumedInstantaneousTrip(ProtectionInput branch, ProtectiveDevice feederDevice)
+    {
+        var (row, _) = ShortCircuitProtection.Row(branch);
+        var percent = ShortCircuitProtection.Percent(row, feederDevice);
+        var amps = branch.FullLoadAmps * percent / 100m;
+        return (amps, $"instantaneous-trip breaker assumed at {Format.Percent(percent)} × {Format.Amps(branch.FullLoadAmps)} (Table 430.52(C)(1), {ShortCircuitProtection.DeviceName(feederDevice)} column)");
     }
 
     /// <summary>One unit per motor: a line of several identical motors counts each (as distinct objects, so one can be "the largest").</summary>

@@ -28,8 +28,17 @@ public static class Grounding
         {
             var ratio = Area(p) / Area(min);
             var needed = Area(WireSpec.Single(size)) * ratio;
-            var upsized = ConductorSize.All.FirstOrDefault(s => s >= size && Cmil(s) >= needed);
-            if (upsized != default && upsized > size)
+            // (18 AWG is the default size, so "none found" is told apart by nullable, not by default.)
+            var found = ConductorSize.All.Where(s => s >= size && Cmil(s) >= needed).Cast<ConductorSize?>().FirstOrDefault();
+            // No size is large enough for the increase: never fall back to the unincreased size in silence.
+            // A single set is capped at its phase conductor anyway (250.122(A), below).
+            ConductorSize upsized;
+            if (found is { } f) upsized = f;
+            else if (phase is { Sets: 1 }) upsized = ConductorSize.Largest;
+            else
+                return Result<ConductorSize>.Missing(
+                    $"the 250.122(B) increase needs {Format.Number(needed)} cmil, more than the largest conductor size carried", [.. steps]);
+            if (upsized > size)
             {
                 size = upsized;
                 steps.Add(new Step("Upsized grounding conductor", size.ToString(), "NEC 250.122(B)",
