@@ -86,7 +86,8 @@ public class CoverageTests
     [InlineData("NEC 430.6(A)(1), Table 430.250", new[] { "430.6(A)(1)", "Table 430.250" })]
     [InlineData("NEC Chapter 9 Table 9, note 2", new[] { "Chapter 9 Table 9, note 2" })]
     [InlineData("NEC 430.62(A), 240.6(A)", new[] { "430.62(A)", "240.6(A)" })]
-    [InlineData("NEMA ICS 2 (as collected, not checked against the standard)", new[] { "NEMA ICS 2 (as collected, not checked against the standard)" })]
+    [InlineData("NEC 430.7(B), Equation 430.110(C)(1)a", new[] { "430.7(B)", "Equation 430.110(C)(1)a" })]
+    [InlineData("NEMA ICS 2 (as collected, not checked against the standard)", new string[0])]
     [InlineData("common practice, no source", new string[0])]
     public void ARulesReferencesAreSplitAtCommasBetweenReferences(string rule, string[] expected)
     {

@@ -257,4 +257,19 @@ public class FindingTests
         Assert.Contains(cannot, f => Describe(f) == "4:8-4:13 M204");
         Assert.DoesNotContain(a.Findings, f => f.Code is FindingCodes.WireUndersized or FindingCodes.FeederWireUndersized);
     }
+
+    [Fact]
+    public void M216_SuppliesAnotherVoltage()
+    {
+        // A 208 V panel supplied from a 480 V feeder is behind a transformer: its motors' currents (Table 430.250, 208 V column)
+        // cannot be added to the 480 V feeder's, and its protection is a 450.3 question. The 208 V panel is still sized.
+        var text = Text([.. Base, "feeder P 208V 3ph", "  from F", "  motor N 5hp"]);
+        var f = Single(text, FindingCodes.SuppliesAnotherVoltage);
+        Assert.Equal("1:1-1:7 M216", Describe(f));
+        Assert.Null(f.Fix);
+        var a = Analyzer.Analyze(text);
+        Assert.Null(a.Feeders.Values.Single(x => x.Tag == "F").RequiredAmpacity);
+        // 5 hp at 208 V: 16.7 A (Table 430.250); 430.24: 125 % = 20.88 A.
+        Assert.Equal(20.875m, a.Feeders.Values.Single(x => x.Tag == "P").RequiredAmpacity!.Value);
+    }
 }

@@ -24,6 +24,7 @@ public static class FindingCodes
     public const string CannotCheck = "M204";
     public const string OverloadAboveRunningLimit = "M205";
     public const string FeederDeviceNotSized = "M215";
+    public const string SuppliesAnotherVoltage = "M216";
 
     public const string NotWritten = "M301";
 }
