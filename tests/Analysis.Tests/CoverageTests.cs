@@ -74,6 +74,36 @@ public class CoverageTests
         Assert.All(shown, r => Assert.Contains(r, applied));
     }
 
+    [Theory]
+    [InlineData("dairy-bottling.motors")]
+    [InlineData("booster-station.motors")]
+    [InlineData("cabinet-shop.motors")]
+    public void EveryExampleCircuitsHoverRulesAreInItsAppliedList(string example)
+    {
+        var dir = AppContext.BaseDirectory;
+        while (!File.Exists(Path.Combine(dir, "MotorLang.sln"))) dir = Path.GetDirectoryName(dir)!;
+        var analysis = Analyze(File.ReadAllText(Path.Combine(dir, "examples", example)));
+        var headers = analysis.Motors.Values.Select(m => m.Motor.Header.Line.Index).Concat(analysis.Feeders.Values.Select(f => f.Feeder.Header.Line.Index));
+        foreach (var line in headers)
+        {
+            var view = Breakdown.At(analysis, new TextPosition(line, 0))!;
+            var applied = view.Coverage!.Applied.Select(a => a.Rule).ToHashSet();
+            var shown = view.Sections.SelectMany(s => s.Steps).SelectMany(s => RulesApplied.References(s.Rule));
+            Assert.All(shown, r => Assert.True(applied.Contains(r), $"{view.Title}: {r} is shown but not listed as applied"));
+        }
+    }
+
+    [Fact]
+    public void ConditionalItemsFollowWhatIsWritten()
+    {
+        // The base list writes no length and no conduit: the drop and the conduit fill are listed as not checked.
+        Assert.Contains("210.19 IN No. 4, 215.2(A)(2) IN No. 2", NotCheckedRules(Plain));
+        Assert.Contains("Chapter 9 Table 1", NotCheckedRules(Plain));
+        var written = NotCheckedRules(With(8, "    wire 12 AWG\n    length 100ft\n    conduit 3/4in"));
+        Assert.DoesNotContain("210.19 IN No. 4, 215.2(A)(2) IN No. 2", written);
+        Assert.DoesNotContain("Chapter 9 Table 1", written);
+    }
+
     [Fact]
     public void ALineHoverLeavesTheCoverageToTheWholeMotor()
     {

@@ -13,6 +13,10 @@ public enum Reach
     /// <summary>Motors written with <c>starting drive</c>.</summary>
     DriveFedMotor,
     EveryFeeder,
+    /// <summary>Motors and feeders whose running voltage drop was not worked out (no <c>length</c> written).</summary>
+    NoLength,
+    /// <summary>Motors whose written conduit's fill was not worked out (none written).</summary>
+    NoConduit,
 }
 
 /// <summary>A rule that bears on a circuit but that MotorLang does not check: the rule, what it covers (one line), and why it is left out.</summary>
@@ -54,6 +58,10 @@ public static class NotChecked
             "MotorLang holds no drive data; it checks the 430.52 limit only", Reach.DriveFedMotor),
         new("430.131", "several motors supplied by one drive",
             "MotorLang sizes each motor as if it had its own drive", Reach.DriveFedMotor),
+        new("210.19 IN No. 4, 215.2(A)(2) IN No. 2", "running voltage drop against the drop limit",
+            "no 'length' is written (or no wire could be chosen), so there is nothing to work it out from", Reach.NoLength),
+        new("Chapter 9 Table 1", "fill of the conduit as installed",
+            "no 'conduit' is written, or its fill cannot be worked out (the hover shows the smallest that fits, where it can)", Reach.NoConduit),
         new("430.28, 240.21", "feeder taps", "the list has no tap conductors", Reach.EveryFeeder),
         new("450.3", "transformer overcurrent protection", "transformers are not part of the list", Reach.EveryFeeder),
         new("215.10, 240.13", "ground-fault protection of equipment for feeder devices of 1000 A or more",
@@ -65,13 +73,22 @@ public static class NotChecked
     ];
 
     /// <summary>What is not checked on a motor's branch circuit.</summary>
-    public static IReadOnlyList<NotCheckedRule> For(MotorResult motor) =>
-        All.Where(r => r.Reach is Reach.EveryCircuit or Reach.EveryMotor
-                       || (r.Reach == Reach.DriveFedMotor && motor.StartingMethod == StartingMethod.Drive)).ToList();
+    public static IReadOnlyList<NotCheckedRule> For(MotorResult motor) => All.Where(r => r.Reach switch
+    {
+        Reach.EveryCircuit or Reach.EveryMotor => true,
+        Reach.DriveFedMotor => motor.StartingMethod == StartingMethod.Drive,
+        Reach.NoLength => motor.BranchDrop?.HasValue != true,
+        Reach.NoConduit => motor.ConduitFillPercent is null,
+        _ => false,
+    }).ToList();
 
     /// <summary>What is not checked on a feeder.</summary>
-    public static IReadOnlyList<NotCheckedRule> For(FeederResult feeder) =>
-        All.Where(r => r.Reach is Reach.EveryCircuit or Reach.EveryFeeder).ToList();
+    public static IReadOnlyList<NotCheckedRule> For(FeederResult feeder) => All.Where(r => r.Reach switch
+    {
+        Reach.EveryCircuit or Reach.EveryFeeder => true,
+        Reach.NoLength => feeder.Drop?.HasValue != true,
+        _ => false,
+    }).ToList();
 
     /// <summary>How docs/checks.md names a reach.</summary>
     public static string Describe(Reach reach) => reach switch
@@ -79,6 +96,8 @@ public static class NotChecked
         Reach.EveryCircuit => "every motor and feeder",
         Reach.EveryMotor => "every motor",
         Reach.DriveFedMotor => "motors fed by a drive",
+        Reach.NoLength => "motors and feeders with no `length`",
+        Reach.NoConduit => "motors with no `conduit`",
         _ => "every feeder",
     };
 }

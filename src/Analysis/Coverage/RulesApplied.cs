@@ -22,13 +22,20 @@ public static class RulesApplied
     /// <summary>The steps of every computed value (one with a value) on a motor or feeder result.</summary>
     public static IEnumerable<Step> StepsOf(object circuitResult) =>
         Explained.GetOrAdd(circuitResult.GetType(), PropertiesOf)
-            .Select(p => p.GetValue(circuitResult) as IExplained)
-            .Where(r => r is { HasValue: true })
-            .SelectMany(r => r!.Steps);
+            .SelectMany(p => p.GetValue(circuitResult) switch
+            {
+                IExplained one => [one],
+                IEnumerable<IExplained> many => many,
+                _ => [],
+            })
+            .Where(r => r.HasValue)
+            .SelectMany(r => r.Steps);
 
+    /// <summary>Properties holding a result, or a list of results (one per winding, say).</summary>
     private static PropertyInfo[] PropertiesOf(Type type) =>
         type.GetProperties(BindingFlags.Public | BindingFlags.Instance)
-            .Where(p => typeof(IExplained).IsAssignableFrom(p.PropertyType) && p.GetIndexParameters().Length == 0)
+            .Where(p => p.GetIndexParameters().Length == 0
+                        && (typeof(IExplained).IsAssignableFrom(p.PropertyType) || typeof(IEnumerable<IExplained>).IsAssignableFrom(p.PropertyType)))
             .OrderBy(p => p.MetadataToken)
             .ToArray();
 

@@ -32,8 +32,9 @@ public static class HoverRenderer
     private static void AppendCoverage(StringBuilder sb, CircuitCoverage coverage)
     {
         sb.Append("\n---\n");
-        if (coverage.Applied.Count > 0)
-            sb.Append("\n**Checked:** ").Append(Escape(string.Join(", ", coverage.Applied.Select(a => a.Rule)))).Append('\n');
+        sb.Append("\n**Checked:** ")
+            .Append(coverage.Applied.Count > 0 ? Escape(string.Join(", ", coverage.Applied.Select(a => a.Rule))) : "nothing could be worked out (see the findings)")
+            .Append('\n');
         if (coverage.NotChecked.Count == 0) return;
         sb.Append("\n**Not checked:**\n\n");
         foreach (var n in coverage.NotChecked) sb.Append("- ").Append(Escape(n.Rule)).Append(": ").Append(Escape(n.Text)).Append('\n');
