@@ -239,6 +239,19 @@ public class WorkedExampleTests
         Assert.Equal(ConductorSize.Parse("10"), Grounding.Minimum(200m, ConductorMaterial.Copper, WireSpec.Single(ConductorSize.Parse("10"))).Value);
     }
 
+    // NEMA starter suggestion (as collected in nema-starters.csv, not checked against NEMA ICS 2 itself): size 1 is rated
+    // 10 hp at 460-575 V, so a 10 hp 480 V motor gets size 1. A 380 V motor falls in none of the 200, 230 and 460-575 V columns,
+    // and gets no suggestion rather than the 460 V column's.
+    [Fact]
+    public void NemaStarterOnlyForTheVoltagesItsColumnsAreFor()
+    {
+        Assert.Equal(2, Controllers.NemaSize(10m, 480m, out var size).Value); // third row: 00, 0, 1
+        Assert.Equal("1", size);
+        var other = Controllers.NemaSize(10m, 380m, out _);
+        Assert.Null(other.Value);
+        Assert.Contains("380 V", other.Unavailable);
+    }
+
     // 250.122(B) with no size large enough. Table 250.122: 6000 A -> 800 kcmil Cu. Phase conductors 10 sets of 2000 kcmil
     // (20 000 000 cmil) where 2 sets of 1/0 (2 x 105 600 = 211 200 cmil) would do: ratio 94.7, so the grounding conductor
     // would need 800 000 x 94.7 = 75.8 million cmil, beyond 2000 kcmil: no size is given rather than the unincreased 800 kcmil.

@@ -14,7 +14,9 @@ public static class Controllers
     {
         sizeName = "";
         var t = CodeTables.NemaStarters;
-        var column = volts switch { <= 210 => "hp200", <= 240 => "hp230", _ => "hp460" };
+        // Only the voltages the columns are for: a 380 V or 690 V motor is not rated by either neighbour's column.
+        string? column = volts switch { >= 200 and <= 210 => "hp200", >= 220 and <= 240 => "hp230", >= 440 and <= 600 => "hp460", _ => null };
+        if (column is null) return Result<int>.Missing($"the NEMA sizes carried are for 200, 230 and 460–575 V, not {Format.Number(volts)} V");
         var row = t.Rows.FirstOrDefault(r => CsvTable.Number(r[t.Column(column)]) >= horsepower);
         if (row is null) return Result<int>.Missing("larger than NEMA size 7; use the manufacturer's rating");
         sizeName = row[0];
