@@ -17,6 +17,7 @@ public static class FindingCodes
     public const string ConduitOverfilled = "M109";
     public const string VoltageMismatch = "M110";
     public const string NeedsNameplate = "M111";
+    public const string SmallConductorNotPermitted = "M120";
 
     public const string ProtectionMayTrip = "M201";
     public const string VoltageDropHigh = "M202";
@@ -25,6 +26,14 @@ public static class FindingCodes
     public const string OverloadAboveRunningLimit = "M205";
     public const string FeederDeviceNotSized = "M215";
     public const string SuppliesAnotherVoltage = "M216";
+
+    /// <summary>
+    /// Outside what MotorLang sizes (an unsupported kind, a device type it does not know, a
+    /// voltage with no table, a rule or table it does not carry): says what and why, and nothing
+    /// on that circuit is computed by a wrong rule instead.
+    /// </summary>
+    public const string OutsideScope = "M210";
+    public const string SmallConductorConditions = "M211";
 
     public const string NotWritten = "M301";
 }

@@ -8,6 +8,7 @@ using MotorLang.Parser.Text;
 using MotorLang.Sizing.Domain;
 using MotorLang.Sizing.Rules;
 using MotorLang.Sizing;
+using MotorLang.Sizing.Tables;
 
 namespace MotorLang.Analysis.Sizing;
 
@@ -37,10 +38,18 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
         }
 
         var motorResults = supplied.SelectMany(f => f.Motors).Select(m => motors.GetValueOrDefault(m)).OfType<MotorResult>().ToList();
-        if (motorResults.Any(m => !m.FullLoadCurrent.HasValue))
+        if (r.Volts > SystemVoltages.LowVoltageLimit)
         {
+            findings.Add(new Finding(FindingCodes.OutsideScope, Severity.Warning, volts.Range,
+                "feeders over 1000 V are not sized by MotorLang (Article 430 Part XI governs their motors): nothing on this feeder is checked"));
+            return r;
+        }
+
+        if (motorResults.FirstOrDefault(m => !m.FullLoadCurrent.HasValue) is { } unsized)
+        {
+            // A sum without that motor would be a confident wrong number, so none is given.
             findings.Add(new Finding(FindingCodes.CannotCheck, Severity.Warning, feeder.Header.KeywordToken.Range,
-                "the feeder cannot be sized: a motor it supplies has no full-load current (see that motor's findings)"));
+                $"the feeder cannot be sized: motor {unsized.Tag} has no full-load current (see its findings), so any sum would be incomplete"));
             return r;
         }
 
@@ -71,6 +80,7 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
         CheckWire(feeder, r, required, settings);
         CheckProtection(feeder, r);
         CheckGround(feeder, r, settings);
+        CheckConduit(feeder, r, settings);
         Drop(r, settings);
         return r;
     }
@@ -89,6 +99,31 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
         }
 
         return new FeederMotor(m.Tag, flc, m.MaximumProtection?.Value, m.Quantity, m.DutyCycleAmps);
+    }
+
+    /// <summary>Conduit fill of the feeder's stated raceway: its phase conductors and grounding conductor (a neutral is not modelled).</summary>
+    private void CheckConduit(FeederNode feeder, FeederResult r, Settings settings)
+    {
+        var replaced = r.WireAmpacity?.Value is { } a && a < (r.RequiredAmpacity?.Value ?? 0) && r.MinimumWire?.Value is not null;
+        var wire = replaced ? r.MinimumWire!.Value : r.Wire ?? r.MinimumWire?.Value;
+        if (wire is null) return;
+        var ground = r.Ground is { } g && r.MinimumGround?.Value is { } mg && g < mg ? mg : r.Ground ?? r.MinimumGround?.Value;
+        var phaseConductors = r.Phases == Phases.Three ? 3 : 2;
+        var contents = new RacewayContents(phaseConductors, wire.Value.Size, ground);
+        r.MinimumConduit = wire.Value.Sets == 1 ? cache.SmallestConduit(contents, settings.Raceway, settings.Insulation) : null;
+        if (feeder.Conduit is not { } conduit) return;
+        var trade = Numbers.Horsepower(conduit.Value.Value);
+        var outcome = ConduitCheck.Check(wire.Value, ground, phaseConductors, settings.Raceway, settings.Insulation, trade, r.MinimumConduit);
+        r.ConduitFillPercent = outcome.FillPercent;
+        if (outcome.NotChecked is { } why)
+            Add(FindingCodes.OutsideScope, Severity.Warning, conduit.Range, why);
+        else if (outcome.FillPercent is { } fill && fill > outcome.PermittedPercent)
+            Add(FindingCodes.ConduitOverfilled, Severity.Error, conduit.Range,
+                $"{trade} in {settings.Raceway.ToString().ToUpperInvariant()} is {fill:0.#} % full; Chapter 9 Table 1 allows {Format.Percent(outcome.PermittedPercent)}"
+                + (outcome.Smallest is { } s ? $": use {s} in" : $"; {r.MinimumConduit?.Unavailable}"),
+                outcome.Smallest is { } smallest
+                    ? new Fix($"Change the conduit to {smallest} in", [EditBuilder.Replace(feeder.Statement("conduit")!.Arg("trade-size")!, $"{smallest}in")])
+                    : null);
     }
 
     /// <summary>Voltage drop along the feeder at its running load (with its wire, or the minimum when none is given).</summary>

@@ -27,6 +27,8 @@ public sealed class MotorResult(MotorNode motor)
     public string Tag => Motor.Tag?.Value ?? "";
     public decimal Horsepower { get; internal set; }
     public decimal Volts { get; internal set; }
+    /// <summary>The motor's rated (nameplate) voltage: the system voltage unless the motor line gives its own.</summary>
+    public decimal RatedVolts { get; internal set; }
     public Phases Phases { get; internal set; }
     public int Quantity { get; internal set; } = 1;
     /// <summary>How the motor is started (a drive brings the drive items into what is not checked).</summary>
@@ -36,7 +38,11 @@ public sealed class MotorResult(MotorNode motor)
     public Result<WireSpec>? MinimumWire { get; internal set; }
     public WireSpec? Wire { get; internal set; }
     public Result<decimal>? WireAmpacity { get; internal set; }
+    /// <summary>For a 16 or 18 AWG branch wire: what 430.22(G) says about it (its ampacity is not read from Table 310.16).</summary>
+    public SmallConductorVerdict? SmallConductor { get; internal set; }
     public ProtectiveDevice Device { get; internal set; } = ProtectiveDevice.InverseTimeBreaker;
+    /// <summary>A protection line is written but its device type is not one MotorLang knows: nothing about protection is sized.</summary>
+    public bool DeviceUnknown { get; internal set; }
     public decimal? ProtectionRating { get; internal set; }
     public Result<decimal>? MaximumProtection { get; internal set; }
     /// <summary>What the 430.52 maximum was worked out from (a feeder reads it for 430.62(A) Exception No. 1).</summary>
@@ -103,6 +109,8 @@ public sealed class FeederResult(FeederNode feeder)
     public ConductorSize? Ground { get; internal set; }
     public Result<ConductorSize>? MinimumGround { get; internal set; }
     public Result<Drop>? Drop { get; internal set; }
+    public Result<TradeSize>? MinimumConduit { get; internal set; }
+    public decimal? ConduitFillPercent { get; internal set; }
     /// <summary>Drop from the source to this feeder's load end, through the feeders it is supplied from.</summary>
     public decimal? CumulativeDropPercent { get; internal set; }
 }

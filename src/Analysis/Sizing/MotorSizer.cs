@@ -41,7 +41,16 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         r.Phases = phases;
         r.Quantity = Get(motor, m => m.Quantity)?.Value ?? 1;
         r.StartingMethod = Get(motor, m => m.Starting)?.Value ?? StartingMethod.FullVoltage;
-        if (!CheckVoltage(motor, ratedVolts, phases, systemVolts.Value.Value, systemPhases.Value)) return r;
+        if (!CheckVoltage(motor, ratedVolts, phases, systemVolts.Value.Value, systemPhases.Value, out var columnVolts)) return r;
+        r.RatedVolts = ratedVolts;
+        if (Math.Max(ratedVolts, systemVolts.Value.Value) > SystemVoltages.LowVoltageLimit)
+        {
+            // Part XI has its own rules for conductors, protection and controllers; the low-voltage
+            // tables would give a confident wrong answer, so nothing is computed.
+            Add(FindingCodes.OutsideScope, Severity.Warning, motor.RatedVoltage?.Range ?? motor.Header.KeywordToken.Range,
+                $"motors over 1000 V are not sized by MotorLang (Article 430 Part XI): nothing on this motor is checked, and its feeder is not summed");
+            return r;
+        }
 
         var kind = Get(motor, m => m.Kind)?.Value ?? (phases == Phases.Dc ? MotorKind.Dc : MotorKind.Induction);
         var design = Get(motor, m => m.Design)?.Value;
@@ -49,7 +58,7 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         var nameplate = Get(motor, m => m.Nameplate)?.Value.Value;
         var basis = Get(motor, m => m.Application)?.Value ?? NameplateBasis.None;
         var ratedPf = Get(motor, m => m.RatedPowerFactor)?.Value ?? 1.0m;
-        var rating = new MotorRating(power.Value.Value, power.Value.Unit == Unit.Kw, ratedVolts, phases, kind, design, efficiency, basis, nameplate, ratedPf);
+        var rating = new MotorRating(power.Value.Value, power.Value.Unit == Unit.Kw, columnVolts, phases, kind, design, efficiency, basis, nameplate, ratedPf);
         r.Horsepower = power.Value.Unit == Unit.Kw
             ? MotorCurrent.Lookup(rating)?.Horsepower ?? power.Value.Value / MotorCurrent.KilowattsPerHorsepower
             : power.Value.Value;
@@ -79,18 +88,25 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
             Add(FindingCodes.CannotCheck, Severity.Warning, motor.Header.KeywordToken.Range, $"branch conductors cannot be sized: {r.RequiredAmpacity.Unavailable}");
         }
 
-        CheckProtection(motor, r, flc, phases, kind, design, efficiency);
+        var protectionFlc = ProtectionCurrent(rating, flc);
+        CheckProtection(motor, r, protectionFlc, phases, kind, design, efficiency);
+        if (protectionFlc != flc && r.MaximumProtection?.Value is { } lowerMax)
+            r.MaximumProtection = new Result<decimal>(lowerMax, [
+                Step.Amps("Full-load current for the 430.52 maximum", protectionFlc, "common practice, no source",
+                    $"{Format.Number(r.Horsepower)} hp row gives {Format.Amps(flc)} for conductors; the next smaller row gives {Format.Amps(protectionFlc)}, so the maximum is never larger than the motor allows"),
+                .. r.MaximumProtection.Steps]);
         CheckOverload(motor, r);
-        CheckDisconnectAndController(motor, r, flc);
-        CheckGround(motor, r, flc, phases, kind, design, efficiency, settings);
+        CheckDisconnectAndController(motor, r, flc, power.Value);
+        CheckGround(motor, r, protectionFlc, phases, kind, design, efficiency, settings);
         LockedRotor(motor, r, phases, design);
         CheckVoltageDrop(motor, r, flc, settings);
         CheckConduit(motor, r, phases, settings);
         return r;
     }
 
-    private bool CheckVoltage(MotorNode motor, decimal ratedVolts, Phases phases, decimal systemVolts, Phases systemPhases)
+    private bool CheckVoltage(MotorNode motor, decimal ratedVolts, Phases phases, decimal systemVolts, Phases systemPhases, out decimal columnVolts)
     {
+        columnVolts = ratedVolts;
         var range = motor.RatedVoltage?.Range ?? motor.Phases?.Range ?? motor.Header.KeywordToken.Range;
         if (phases != systemPhases && !(phases == Phases.Single && systemPhases == Phases.Three))
         {
@@ -100,19 +116,34 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         }
 
         if (ratedVolts == systemVolts) return true;
+        if (SystemVoltages.IsUsualPair(systemVolts, ratedVolts, phases)) return true;
         var rated = Band(ratedVolts);
         var system = Band(systemVolts);
         if (rated is not null && rated == system) return true;
         if (ratedVolts == 230 && systemVolts == 208)
         {
+            // 208 V is outside the 220-240 V range the Table 430.248/430.250 headnotes give the 230 V
+            // column, so the motor's current is taken from the 208 V column (higher), never the 230 V one.
+            columnVolts = 208;
             Add(FindingCodes.VoltageMismatch, Severity.Warning, range,
-                "a 230 V motor on a 208 V system runs at 90 % voltage, the edge of its tolerance; a 200 V or 208-230 V rated motor is the usual choice (common practice, no source)");
+                "a 230 V motor on a 208 V system runs at 90 % voltage, the edge of its tolerance (common practice, no source); 208 V is outside the 220-240 V range of the 230 V column (Table 430.250 headnote), so it is sized from the 208 V column; a 200 V or 208-230 V rated motor is the usual choice");
             return true;
         }
 
         Add(FindingCodes.VoltageMismatch, Severity.Error, range,
             $"a {Format.Number(ratedVolts)} V motor cannot run on the {Format.Number(systemVolts)} V feeder {motor.Feeder.Tag?.Value} (Table 430.250 headnote voltage ranges)");
         return false;
+    }
+
+    /// <summary>
+    /// The full-load current the 430.52 maximum is worked out from: for a rating between table rows
+    /// (a kW rating, or an unlisted horsepower) the smaller row's, so that the maximum is never
+    /// larger than the motor allows, while conductors use the larger row's (docs/checks.md).
+    /// </summary>
+    private decimal ProtectionCurrent(MotorRating rating, decimal flc)
+    {
+        if (rating.Basis != NameplateBasis.None || !MotorCurrent.IsBetweenRows(rating)) return flc;
+        return cache.DesignCurrent(rating with { LowerRow = true }).Value is { } lower && lower < flc ? lower : flc;
     }
 
     /// <summary>The voltage band a system voltage or a motor rating belongs to (the headnote ranges of Tables 430.248/430.250).</summary>
@@ -142,6 +173,12 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         }
 
         r.Wire = wire.Value;
+        if (SmallConductors.Applies(wire.Value.Size))
+        {
+            CheckSmallConductor(motor, r, owner, wire, conditions);
+            return;
+        }
+
         r.WireAmpacity = cache.Allowable(wire.Value, conditions, designBcd);
         if (r.WireAmpacity.Value is not { } allowable)
         {
@@ -161,10 +198,39 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
                 $"wire {wire.Value} carries {Format.Amps(allowable)} here; NEC 430.22 requires {Format.Amps(required)}, and {r.MinimumWire?.Unavailable}");
     }
 
+    /// <summary>430.22(G): 16 and 18 AWG copper only for small currents, and only under conditions the list cannot show.</summary>
+    private void CheckSmallConductor(MotorNode motor, MotorResult r, MotorNode? owner, Located<WireSpec> wire, InstallationConditions conditions)
+    {
+        var current = Math.Max(r.FullLoadCurrent.Value ?? 0, Get(motor, m => m.Nameplate)?.Value.Value ?? 0);
+        var verdict = SmallConductors.Check(wire.Value.Size, conditions.Material, current);
+        r.SmallConductor = verdict;
+        if (!verdict.Permitted)
+        {
+            var minimum = r.MinimumWire?.Value;
+            Add(FindingCodes.SmallConductorNotPermitted, Severity.Error, RangeOn(motor, owner, wire.Range),
+                $"wire {wire.Value} is not permitted here: {verdict.Reason}" + (minimum is { } m ? $"; use {m}" : ""),
+                minimum is { } fix ? ReplaceOrOverride(motor, owner, "wire", "size", fix.ToString(), $"Change the wire to {fix}") : null);
+            return;
+        }
+
+        Add(FindingCodes.SmallConductorConditions, Severity.Warning, RangeOn(motor, owner, wire.Range),
+            $"wire {wire.Value} is permitted for {Format.Amps(current)} only {verdict.Reason}; the list cannot show these, so they are not checked");
+    }
+
     private void CheckProtection(MotorNode motor, MotorResult r, decimal flc, Phases phases, MotorKind kind, DesignLetter? design, Efficiency efficiency)
     {
         var device = Get(motor, m => m.Protection, out var deviceOwner);
         var rating = Get(motor, m => m.ProtectionRating, out var ratingOwner);
+        if (device is null && motor.Statement("protection") is { } written)
+        {
+            // The line names a device MotorLang does not know (the parser said which): no percentage
+            // of Table 430.52(C)(1) is assumed for it, and nothing that depends on it is sized.
+            r.DeviceUnknown = true;
+            Add(FindingCodes.OutsideScope, Severity.Warning, written.KeywordToken.Range,
+                "this protective device type is not one MotorLang sizes (inverse-time breaker, instantaneous-trip breaker, dual-element or non-time-delay fuse): its NEC 430.52 maximum and the grounding conductor that depends on it are not checked");
+            return;
+        }
+
         r.Device = device?.Value ?? ProtectiveDevice.InverseTimeBreaker;
         r.ProtectionRating = rating?.Value.Value;
         var hardStart = Likes.Has(motor, model, m => m.HardStart);
@@ -233,7 +299,7 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
             if (r.OverloadLimit.Value is { } limit)
                 Add(FindingCodes.OverloadMissing, Severity.Warning, motor.Header.KeywordToken.Range,
                     $"no overload given; NEC 430.32(A)(1) requires one, rated at most {Format.Amps(limit)}",
-                    Insert(motor, $"overload {Format.Number(limit)}A", "Add the overload at its 430.32(A)(1) limit"));
+                    Insert(motor, $"overload {Format.Number(RoundDown(limit))}A", "Add the overload at its 430.32(A)(1) limit"));
             else
                 Add(FindingCodes.CannotCheck, Severity.Warning, motor.Header.KeywordToken.Range,
                     "no overload and no nameplate current: NEC 430.32 overloads are sized from the nameplate");
@@ -251,13 +317,13 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         if (value > absolute)
             Add(FindingCodes.OverloadTooLarge, Severity.Error, RangeOn(motor, owner, overload.Range),
                 $"overload {Format.Amps(value)} is above even the NEC 430.32(C) maximum of {Format.Amps(absolute)}; NEC 430.32(A)(1) allows {Format.Amps(max)}",
-                ReplaceOrOverride(motor, owner, "overload", "setting", $"{Format.Number(max)}A", $"Change the overload to {Format.Amps(max)}"));
+                ReplaceOrOverride(motor, owner, "overload", "setting", $"{Format.Number(RoundDown(max))}A", $"Change the overload to {Format.Amps(RoundDown(max))}"));
         else if (value > max)
             Add(FindingCodes.OverloadAboveRunningLimit, Severity.Warning, RangeOn(motor, owner, overload.Range),
                 $"overload {Format.Amps(value)} is above the NEC 430.32(A)(1) limit of {Format.Amps(max)}; that is allowed only where the smaller device will not start the motor (430.32(C), up to {Format.Amps(absolute)})");
     }
 
-    private void CheckDisconnectAndController(MotorNode motor, MotorResult r, decimal flc)
+    private void CheckDisconnectAndController(MotorNode motor, MotorResult r, decimal flc, Quantity power)
     {
         r.Disconnect = cache.Disconnect(flc, r.Horsepower);
         r.Controller = cache.Controller(r.Horsepower);
@@ -269,26 +335,57 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         }
         var need = r.Disconnect.Value!.Value;
         if (Get(motor, m => m.DisconnectRating, out var ampsOwner) is { } amps && amps.Value.Value < need.MinimumAmps)
+        {
+            // The next Table 240.6(A) rating at or above 115 % (a switch rated in between is rare; any rating ≥ 115 % complies).
+            var fix = StandardRatings.AtOrAbove(need.MinimumAmps, fuse: false);
             Add(FindingCodes.DisconnectTooSmall, Severity.Error, RangeOn(motor, ampsOwner, amps.Range),
-                $"disconnect rated {Format.Amps(amps.Value.Value)} is below the {Format.Amps(need.MinimumAmps)} (115 % of {Format.Amps(flc)}) that NEC 430.110(A) requires");
-        if (Get(motor, m => m.DisconnectPower, out var hpOwner) is { } hp && HorsepowerOf(hp.Value) < need.MinimumHorsepower)
+                $"disconnect rated {Format.Amps(amps.Value.Value)} is below the {Format.Amps(need.MinimumAmps)} (115 % of {Format.Amps(flc)}) that NEC 430.110(A) requires"
+                + (fix is { } f ? $": use {Format.Amps(f)}" : ""),
+                fix is { } value ? ReplaceOrOverride(motor, ampsOwner, "disconnect", "rating", $"{Format.Number(value)}A", $"Change the disconnect's ampere rating to {Format.Amps(value)}") : null);
+        }
+
+        var required = RatingText(power, r.Horsepower);
+        if (Get(motor, m => m.DisconnectPower, out var hpOwner) is { } hp && !Covers(hp.Value, power, need.MinimumHorsepower))
             Add(FindingCodes.DisconnectTooSmall, Severity.Error, RangeOn(motor, hpOwner, hp.Range),
-                $"disconnect rated {hp.Value} is below the motor's {Numbers.Horsepower(need.MinimumHorsepower)} hp (NEC 430.109(A), 430.110(A))",
-                ReplaceOrOverride(motor, hpOwner, "disconnect", "power", $"{Numbers.Horsepower(need.MinimumHorsepower)}hp", "Change the disconnect's horsepower rating"));
-        if (Get(motor, m => m.ControllerPower, out var cOwner) is { } controller && HorsepowerOf(controller.Value) < r.Horsepower)
+                $"disconnect rated {hp.Value} is below the motor's {Describe(power, need.MinimumHorsepower)} (NEC 430.109(A), 430.110(A))",
+                ReplaceOrOverride(motor, hpOwner, "disconnect", "power", required, "Change the disconnect's horsepower rating"));
+        if (Get(motor, m => m.ControllerPower, out var cOwner) is { } controller && !Covers(controller.Value, power, r.Horsepower))
             Add(FindingCodes.ControllerTooSmall, Severity.Error, RangeOn(motor, cOwner, controller.Range),
-                $"controller rated {controller.Value} is below the motor's {Numbers.Horsepower(r.Horsepower)} hp (NEC 430.83(A)(1))",
-                ReplaceOrOverride(motor, cOwner, "controller", "power", $"{Numbers.Horsepower(r.Horsepower)}hp", "Change the controller rating"));
+                $"controller rated {controller.Value} is below the motor's {Describe(power, r.Horsepower)} (NEC 430.83(A)(1))",
+                ReplaceOrOverride(motor, cOwner, "controller", "power", required, "Change the controller rating"));
     }
+
+    /// <summary>
+    /// Whether a disconnect's or controller's power rating covers the motor: kW against kW when
+    /// both are in kW; otherwise in horsepower (kW ÷ 0.746), against the table row the motor is
+    /// sized at (docs/checks.md).
+    /// </summary>
+    private static bool Covers(Quantity device, Quantity motor, decimal motorHorsepower)
+    {
+        if (device.Unit == Unit.Kw && motor.Unit == Unit.Kw) return device.Value >= motor.Value;
+        return HorsepowerOf(device) >= motorHorsepower;
+    }
+
+    /// <summary>The rating a fix writes: the motor's own kW when it is rated in kW, else its horsepower.</summary>
+    private static string RatingText(Quantity motor, decimal horsepower) =>
+        motor.Unit == Unit.Kw ? $"{Quantity.Number(motor.Value)}kW" : $"{Numbers.Horsepower(horsepower)}hp";
+
+    private static string Describe(Quantity motor, decimal horsepower) =>
+        motor.Unit == Unit.Kw ? $"{Quantity.Number(motor.Value)} kW (sized as {Numbers.Horsepower(horsepower)} hp)" : $"{Numbers.Horsepower(horsepower)} hp";
 
     private void CheckGround(MotorNode motor, MotorResult r, decimal flc, Phases phases, MotorKind kind, DesignLetter? design, Efficiency efficiency, Settings settings)
     {
         var material = settings.Material;
         var phaseMinimum = r.MinimumWire?.Value;
+        if (r.DeviceUnknown) return;
+        // An installed wire smaller than the minimum is itself an error whose fix raises it to the
+        // minimum: the grounding conductor is sized for that corrected wire, so check and size give
+        // the same number (and 250.122(A) never caps it at a wire that has to be replaced).
+        var phase = WireToBeReplaced(r) && phaseMinimum is { } corrected ? corrected : r.Wire ?? phaseMinimum;
         if (r.Device == ProtectiveDevice.InstantaneousTripBreaker)
-            r.MinimumGround = cache.GroundForInstantaneousTrip(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency), material, r.Wire ?? phaseMinimum, phaseMinimum);
+            r.MinimumGround = cache.GroundForInstantaneousTrip(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency), material, phase, phaseMinimum);
         else if ((r.ProtectionRating ?? r.MaximumProtection?.Value) is { } device)
-            r.MinimumGround = cache.Ground(device, material, r.Wire ?? phaseMinimum, phaseMinimum, "NEC 250.122(D)(1)");
+            r.MinimumGround = cache.Ground(device, material, phase, phaseMinimum, "NEC 250.122(D)(1)");
         var ground = Get(motor, m => m.Ground, out var owner);
         if (r.MinimumGround?.Value is not { } min)
         {
@@ -313,6 +410,11 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
                 ReplaceOrOverride(motor, owner, "ground", "size", min.ToString(), $"Change the grounding conductor to {min}"));
     }
 
+    /// <summary>Whether the installed wire is reported too small (its fix replaces it with the minimum).</summary>
+    private static bool WireToBeReplaced(MotorResult r) =>
+        r.Wire is not null && (r.SmallConductor is { Permitted: false }
+                               || (r.WireAmpacity?.Value is { } allowable && r.RequiredAmpacity?.Value is { } required && allowable < required));
+
     private void CheckVoltageDrop(MotorNode motor, MotorResult r, decimal flc, Settings settings)
     {
         var length = Get(motor, m => m.Length)?.Value;
@@ -333,25 +435,32 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
 
     private void CheckConduit(MotorNode motor, MotorResult r, Phases phases, Settings settings)
     {
-        var wire = r.Wire ?? r.MinimumWire?.Value;
+        // The wire and ground the check and the fixes agree on: a wire reported too small counts at its corrected size.
+        var wire = WireToBeReplaced(r) ? r.MinimumWire?.Value : r.Wire ?? r.MinimumWire?.Value;
         if (wire is null) return;
-        var ground = r.Ground ?? r.MinimumGround?.Value;
+        var ground = r.Ground is { } g && r.MinimumGround?.Value is { } mg && g < mg ? mg : r.Ground ?? r.MinimumGround?.Value;
         var contents = new RacewayContents(phases == Phases.Three ? 3 : 2, wire.Value.Size, ground);
         r.MinimumConduit = cache.SmallestConduit(contents, settings.Raceway, settings.Insulation);
         if (Get(motor, m => m.Conduit, out var owner) is not { } conduit) return;
         var trade = Numbers.Horsepower(conduit.Value.Value);
-        r.ConduitFillPercent = ConduitFill.FillPercent(contents, settings.Raceway, trade);
-        if (r.ConduitFillPercent is { } fill && fill > 40m && r.MinimumConduit.Value is { } smallest)
+        var outcome = ConduitCheck.Check(wire.Value, ground, contents.PhaseConductors, settings.Raceway, settings.Insulation, trade,
+            wire.Value.Sets == 1 ? r.MinimumConduit : null);
+        r.ConduitFillPercent = outcome.FillPercent;
+        if (outcome.NotChecked is { } why)
+            Add(FindingCodes.OutsideScope, Severity.Warning, RangeOn(motor, owner, conduit.Range), why);
+        else if (outcome.FillPercent is { } fill && fill > outcome.PermittedPercent)
             Add(FindingCodes.ConduitOverfilled, Severity.Error, RangeOn(motor, owner, conduit.Range),
-                $"{trade} in {settings.Raceway.ToString().ToUpperInvariant()} is {fill:0.#} % full; Chapter 9 Table 1 allows 40 %: use {smallest} in",
-                ReplaceOrOverride(motor, owner, "conduit", "trade-size", $"{smallest}in", $"Change the conduit to {smallest} in"));
+                $"{trade} in {settings.Raceway.ToString().ToUpperInvariant()} is {fill:0.#} % full; Chapter 9 Table 1 allows {Format.Percent(outcome.PermittedPercent)}"
+                + (outcome.Smallest is { } s ? $": use {s} in" : $"; {r.MinimumConduit.Unavailable}"),
+                outcome.Smallest is { } smallest ? ReplaceOrOverride(motor, owner, "conduit", "trade-size", $"{smallest}in", $"Change the conduit to {smallest} in") : null);
     }
 
     private void LockedRotor(MotorNode motor, MotorResult r, Phases phases, DesignLetter? design)
     {
         if (phases == Phases.Dc) return;
         if (Get(motor, m => m.CodeLetter) is { } letter)
-            r.LockedRotorFromCodeLetter = cache.LockedRotorFromCodeLetter(r.Horsepower, r.Volts, phases, letter.Value);
+            // Table 430.7(B) gives kVA per hp at the motor's rated voltage: the current is worked out at that voltage, not the system's.
+            r.LockedRotorFromCodeLetter = cache.LockedRotorFromCodeLetter(r.Horsepower, r.RatedVolts, phases, letter.Value);
         r.LockedRotorTableMaximum = cache.LockedRotorMaximum(r.Horsepower, r.Volts, phases, design ?? DesignLetter.B);
     }
 
@@ -390,6 +499,9 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         findings.Add(finding);
         if (place.InheritedFrom is { } owner) Inherited.Add((finding, owner));
     }
+
+    /// <summary>A limit written with two decimals, rounded down so that the written value never exceeds it.</summary>
+    private static decimal RoundDown(decimal limit) => decimal.Floor(limit * 100m) / 100m;
 
     private static decimal HorsepowerOf(Quantity q) => q.Unit == Unit.Kw ? q.Value / MotorCurrent.KilowattsPerHorsepower : q.Value;
 

@@ -17,8 +17,10 @@ public static class Suggestions
             }
         }
 
-        // Allow roughly one typo per three letters; beyond that a suggestion is noise.
-        return best is not null && bestDistance <= Math.Max(1, input.Length / 3) ? best : null;
+        // Allow roughly one typo per three letters; beyond that a suggestion is noise. A word must
+        // keep more letters than it changes: any one letter is one edit from any other, so 'Z'
+        // is not close to 'A'.
+        return best is not null && bestDistance <= Math.Max(1, input.Length / 3) && bestDistance < input.Length ? best : null;
     }
 
     public static string DidYouMean(string input, IEnumerable<string> candidates) =>

@@ -15,6 +15,20 @@ public readonly record struct TradeSize(string Name)
 /// <summary>Conduit fill, Chapter 9 Tables 1, 4 and 5 (THHN/THWN/THWN-2 areas).</summary>
 public static class ConduitFill
 {
+    /// <summary>Whether Chapter 9 Table 5 areas are carried for this insulation (only THHN, THWN and THWN-2 are).</summary>
+    public static bool CarriesInsulation(string insulation) => insulation is "THHN" or "THWN" or "THWN-2";
+
+    /// <summary>Chapter 9 Table 1: 53 % for one conductor, 31 % for two, 40 % for more.</summary>
+    public static decimal PermittedPercent(RacewayContents contents) =>
+        (contents.PhaseConductors + (contents.GroundSize is null ? 0 : 1)) switch { 1 => 53m, 2 => 31m, _ => 40m };
+
+    /// <summary>Whether Table 5 has an area for every conductor in the raceway (it has none below 14 AWG).</summary>
+    public static bool CarriesSizes(RacewayContents contents) =>
+        Area(contents.PhaseSize) is not null && (contents.GroundSize is not { } g || Area(g) is not null);
+
+    /// <summary>Whether Table 4 has this trade size.</summary>
+    public static bool IsTradeSize(string tradeSize) => CodeTables.ConduitArea.Rows.Any(r => r[0] == tradeSize);
+
     /// <summary>The smallest trade size of the raceway whose permitted fill (Table 1) holds the conductors.</summary>
     public static Result<TradeSize> SmallestTradeSize(RacewayContents contents, RacewayType raceway, string insulation)
     {

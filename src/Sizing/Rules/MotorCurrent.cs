@@ -15,6 +15,28 @@ public static class MotorCurrent
     /// <summary>Kilowatts per horsepower, for converting kW ratings (1 hp = 745.7 W; 0.746 as commonly used).</summary>
     public const decimal KilowattsPerHorsepower = 0.746m;
 
+    /// <summary>
+    /// A kW rating whose converted horsepower is at most this far above a table row is that row
+    /// (7.5 kW = 10.05 hp is the metric equivalent of 10 hp). Common practice, no source: metric
+    /// and horsepower series pair this way, and the conversion factor alone moves them 0.6 % apart.
+    /// </summary>
+    public const decimal KilowattTolerancePercent = 1m;
+
+    /// <summary>The table row a converted kW rating is equivalent to, if it is within the tolerance above one.</summary>
+    private static decimal? EquivalentRow(List<decimal> rows, decimal hp)
+    {
+        foreach (var r in rows)
+        {
+            if (r <= hp && hp <= r * (1 + KilowattTolerancePercent / 100m)) return r;
+        }
+
+        return null;
+    }
+
+    /// <summary>Whether a rating falls between two rows of its table (so the 430.52 maximum uses the smaller one).</summary>
+    public static bool IsBetweenRows(MotorRating m) =>
+        m.Basis == NameplateBasis.None && Lookup(m) is { } higher && Lookup(m with { LowerRow = true }) is { } lower && lower.Horsepower != higher.Horsepower;
+
     /// <summary>The current that conductors, short-circuit protection and disconnects are sized from.</summary>
     public static Result<decimal> DesignCurrent(MotorRating m)
     {
@@ -84,12 +106,30 @@ public static class MotorCurrent
         var rows = table.Rows.Select(r => Numbers.Parse(r[0])!.Value).ToList();
         // The synchronous columns start at 25 hp: smaller synchronous motors are not in the table at all.
         if (ReferenceEquals(table, CodeTables.SynchronousFlc) && hp < rows[0]) return null;
-        var tableHp = rows.FirstOrDefault(r => r >= hp);
-        if (tableHp == 0) return null;
-        if (tableHp != hp)
+        var higher = rows.FirstOrDefault(r => r >= hp);
+        if (higher == 0) return null;
+        var tableHp = higher;
+        if (m.Kilowatts && EquivalentRow(rows, hp) is { } equivalent)
         {
-            steps?.Add(new Step("Table rating", $"{Numbers.Horsepower(tableHp)} hp", "common practice, no source",
-                $"{Format.Number(hp)} hp is not a table rating; the next larger one is used"));
+            tableHp = equivalent;
+            if (tableHp != hp)
+                steps?.Add(new Step("Table rating", $"{Numbers.Horsepower(tableHp)} hp", "common practice, no source",
+                    $"{Format.Number(m.Power)} kW is the metric equivalent of {Numbers.Horsepower(tableHp)} hp ({Format.Number(hp)} hp is within {Format.Percent(KilowattTolerancePercent)} of that row)"));
+        }
+        else if (tableHp != hp)
+        {
+            var lower = rows.LastOrDefault(r => r <= hp);
+            if (m.LowerRow && lower != 0)
+            {
+                tableHp = lower;
+                steps?.Add(new Step("Table rating", $"{Numbers.Horsepower(tableHp)} hp", "common practice, no source",
+                    $"{Format.Number(hp)} hp is between table rows; the 430.52 maximum is worked out from the next smaller row, so it is never larger than the motor allows"));
+            }
+            else
+            {
+                steps?.Add(new Step("Table rating", $"{Numbers.Horsepower(tableHp)} hp", "common practice, no source",
+                    $"{Format.Number(hp)} hp is not a table rating; the next larger one is used (conductors, disconnect, controller and feeder)"));
+            }
         }
 
         var column = Column(table, m.Volts, m.Phases);

@@ -46,17 +46,14 @@ public static class ShortCircuitProtection
             return new Result<decimal>(raw, [.. steps]);
         }
 
-        if (p.HardStart)
-        {
-            var (limitPercent, rule) = HardStartPercent(p, fuse);
-            var limit = p.FullLoadAmps * limitPercent / 100m;
-            var rating = StandardRatings.AtOrBelow(limit, fuse);
-            if (rating is null) return Result<decimal>.Missing($"no standard rating at or below {Format.Amps(limit)}", [.. steps]);
-            steps.Add(Step.Amps("Maximum rating (not sufficient to start)", rating.Value, rule,
-                $"{Format.Percent(limitPercent)} × {Format.Amps(p.FullLoadAmps)} = {Format.Amps(limit)}, not to be exceeded"));
-            return new Result<decimal>(rating, [.. steps]);
-        }
+        var table = TableRating(raw, fuse, steps);
+        if (!p.HardStart) return table;
+        return HardStart(p, fuse, table, steps);
+    }
 
+    /// <summary>The table value, or the next higher standard rating where it falls between sizes (430.52(C)(1)(a)).</summary>
+    private static Result<decimal> TableRating(decimal raw, bool fuse, List<Step> steps)
+    {
         if (StandardRatings.IsStandard(raw, fuse))
         {
             steps.Add(Step.Amps("Maximum rating", raw, "NEC 430.52(C)(1)", "the calculated value is a standard rating"));
@@ -68,6 +65,45 @@ public static class ShortCircuitProtection
         steps.Add(Step.Amps("Maximum rating", next.Value, "NEC 430.52(C)(1)(a), 240.6(A)",
             "the next higher standard rating is permitted where the percentage falls between sizes"));
         return new Result<decimal>(next, [.. steps]);
+    }
+
+    /// <summary>
+    /// 430.52(C)(1)(b): where the table rating will not carry the starting current it may be
+    /// increased, never beyond the (b) limit (rounded down to a standard rating). The permission
+    /// only ever increases: the maximum is the larger of the (b) value and the table rating with
+    /// its (a) next size up, so a small motor whose (b) limit falls below the smallest standard
+    /// rating keeps its table maximum.
+    /// </summary>
+    private static Result<decimal> HardStart(ProtectionInput p, bool fuse, Result<decimal> table, List<Step> steps)
+    {
+        var (limitPercent, rule, note) = HardStartPercent(p);
+        var limit = p.FullLoadAmps * limitPercent / 100m;
+        var rating = StandardRatings.AtOrBelow(limit, fuse);
+        // A non-time-delay fuse of at most 600 A may reach 400 %; above 600 A only the 601-6000 A
+        // class at 300 % is left, so a 600 A fuse stays permitted wherever 400 % is above 600 A.
+        if (p.Device == ProtectiveDevice.NonTimeDelayFuse && p.FullLoadAmps * 4 > 600 && (rating is null || rating < 600))
+        {
+            rating = 600;
+            note = "a non-time-delay fuse of 600 A or less may go to 400 % (430.52(C)(1)(b)(1)), and 600 A is below 400 % here";
+        }
+
+        if (rating is { } r)
+            steps.Add(Step.Amps("Limit where the table rating will not start the motor", r, rule,
+                $"{Format.Percent(limitPercent)} × {Format.Amps(p.FullLoadAmps)} = {Format.Amps(limit)}, rounded down to a standard rating; {note}"));
+        else
+            steps.Add(new Step("Limit where the table rating will not start the motor", "below the smallest standard rating", rule,
+                $"{Format.Percent(limitPercent)} × {Format.Amps(p.FullLoadAmps)} = {Format.Amps(limit)}"));
+
+        if (table.Value is not { } tableRating) return rating is { } only ? new Result<decimal>(only, [.. steps]) : table;
+        if (rating is { } hard && hard > tableRating)
+        {
+            steps.Add(Step.Amps("Maximum rating (not sufficient to start)", hard, rule, "the larger of the (b) limit and the table rating"));
+            return new Result<decimal>(hard, [.. steps]);
+        }
+
+        steps.Add(Step.Amps("Maximum rating (not sufficient to start)", tableRating, "NEC 430.52(C)(1)(a), (b)",
+            "the (b) limit is not above the table rating with its next size up, which stays permitted"));
+        return new Result<decimal>(tableRating, [.. steps]);
     }
 
     /// <summary>The Table 430.52(C)(1) row a motor falls in, with its description.</summary>
@@ -88,13 +124,19 @@ public static class ShortCircuitProtection
     }
 
     /// <summary>430.52(C)(1)(b): the maximums where the table rating will not carry the starting current.</summary>
-    private static (decimal Percent, string Rule) HardStartPercent(ProtectionInput p, bool fuse) => p.Device switch
+    /// <remarks>
+    /// A time-delay Class CC fuse may also go to 400 % ((b)(2)); MotorLang does not know a fuse's
+    /// class, so every dual-element fuse gets the 225 % (the conservative reading).
+    /// </remarks>
+    private static (decimal Percent, string Rule, string Note) HardStartPercent(ProtectionInput p) => p.Device switch
     {
-        ProtectiveDevice.NonTimeDelayFuse when p.FullLoadAmps * 4 > 600 => (300m, "NEC 430.52(C)(1)(b)(4)"),
-        ProtectiveDevice.NonTimeDelayFuse => (400m, "NEC 430.52(C)(1)(b)(1)"),
-        ProtectiveDevice.DualElementFuse => (225m, "NEC 430.52(C)(1)(b)(2)"),
-        _ when p.FullLoadAmps <= 100 => (400m, "NEC 430.52(C)(1)(b)(3)"),
-        _ => (300m, "NEC 430.52(C)(1)(b)(3)"),
+        ProtectiveDevice.NonTimeDelayFuse when p.FullLoadAmps * 4 > 600 =>
+            (300m, "NEC 430.52(C)(1)(b)(4)", "above 600 A only fuses of the 601-6000 A class may be used, at 300 %"),
+        ProtectiveDevice.NonTimeDelayFuse => (400m, "NEC 430.52(C)(1)(b)(1)", "non-time-delay fuse not exceeding 600 A"),
+        ProtectiveDevice.DualElementFuse => (225m, "NEC 430.52(C)(1)(b)(2)",
+            "time-delay fuse (a Class CC time-delay fuse may go to 400 %; the fuse class is not known, so 225 % is used)"),
+        _ when p.FullLoadAmps <= 100 => (400m, "NEC 430.52(C)(1)(b)(3)", "inverse-time breaker, full-load current of 100 A or less"),
+        _ => (300m, "NEC 430.52(C)(1)(b)(3)", "inverse-time breaker, full-load current above 100 A"),
     };
 
     private static string ColumnName(ProtectiveDevice d) => d switch
