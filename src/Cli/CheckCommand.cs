@@ -19,7 +19,7 @@ public static class CheckCommand
         var command = new Command("check", "Check motor lists against the code and report problems") { paths, format };
         command.SetAction(result =>
         {
-            var files = SourceFiles.Expand(result.GetValue(paths)!);
+            var files = SourceFiles.Expand(result.GetValue(paths)!, stderr);
             var reports = Analyze(files, stderr);
             var all = reports.SelectMany(r => r.Findings).ToList();
             switch (result.GetValue(format))

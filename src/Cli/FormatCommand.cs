@@ -16,7 +16,7 @@ public static class FormatCommand
         {
             var checkOnly = result.GetValue(check);
             var changed = 0;
-            foreach (var file in SourceFiles.Expand(result.GetValue(paths)!))
+            foreach (var file in SourceFiles.Expand(result.GetValue(paths)!, stderr))
             {
                 var text = SourceFiles.Read(file);
                 var formatted = Formatter.Format(text);

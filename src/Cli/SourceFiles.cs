@@ -1,78 +1,65 @@
-using System.Text;
+using MotorLang.Files;
 
 namespace MotorLang.Cli;
 
-/// <summary>Finds, reads and writes motor-list files: strict UTF-8, a size limit, atomic replacement.</summary>
+/// <summary>The command line's view of the shared file rules (MotorLang.Files): a refused file ends the run with exit 2.</summary>
 public static class SourceFiles
 {
     public const string Extension = ".motors";
 
-    /// <summary>50 MB is the largest list we promise to handle; beyond this a file is refused, not half-read.</summary>
-    public const long MaxBytes = 64L * 1024 * 1024;
-
-    private static readonly UTF8Encoding StrictUtf8 = new(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
-
-    /// <summary>Expands folders to the motor lists below them, in a stable order.</summary>
-    public static IReadOnlyList<string> Expand(IEnumerable<string> paths)
+    /// <summary>
+    /// Expands folders to the motor lists below them: each real file once, in ordinal order. Entries a
+    /// folder search passes over (FIFOs, devices, dangling links, unreadable folders) are named on
+    /// stderr and the run goes on; a path named on the command line is read as given, so a FIFO or a
+    /// device named there is refused with exit 2.
+    /// </summary>
+    public static IReadOnlyList<string> Expand(IEnumerable<string> paths, TextWriter? stderr = null)
     {
         var files = new List<string>();
         foreach (var path in paths)
         {
-            if (Directory.Exists(path))
+            var status = FileSearch.Status(path);
+            if (status is null && !File.Exists(path) && !Directory.Exists(path) && new FileInfo(path).LinkTarget is null)
+                throw new CliException($"cannot read '{path}': no such file or folder");
+            if (status is { Kind: FileKind.Directory })
             {
-                var found = Directory.EnumerateFiles(path, "*" + Extension, SearchOption.AllDirectories)
-                    .Order(StringComparer.Ordinal).ToList();
-                if (found.Count == 0) throw new CliException($"'{path}' is a folder with no {Extension} files in it");
-                files.AddRange(found);
-            }
-            else if (File.Exists(path))
-            {
-                files.Add(path);
+                var found = FileSearch.Find(path, Extension, stayInside: false);
+                foreach (var s in found.Skipped) stderr?.WriteLine($"motorlang: skipped '{s.Path}': {s.Reason}");
+                if (found.Files.Count == 0) throw new CliException($"'{path}' is a folder with no {Extension} files in it");
+                files.AddRange(found.Files);
             }
             else
             {
-                throw new CliException($"cannot read '{path}': no such file or folder");
+                files.Add(path);
             }
         }
 
         return files;
     }
 
-    /// <summary>Reads a file as UTF-8 text, keeping a BOM as U+FEFF so the text prints back byte for byte.</summary>
+    /// <summary>Reads a motor list (regular files only, at most 64 MB, strict UTF-8, BOM kept as U+FEFF).</summary>
     public static string Read(string path)
     {
         try
         {
-            var info = new FileInfo(path);
-            if (info.Length > MaxBytes)
-                throw new CliException($"'{path}' is {info.Length / (1024 * 1024)} MB; motor lists over {MaxBytes / (1024 * 1024)} MB are not read");
-            var bytes = File.ReadAllBytes(path);
-            return StrictUtf8.GetString(bytes);
+            return SafeReader.ReadText(path);
         }
-        catch (DecoderFallbackException e)
+        catch (FileRefusedException e)
         {
-            throw new CliException($"'{path}' is not UTF-8 text (bad byte at offset {e.Index}); save it as UTF-8");
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new CliException($"cannot read '{path}': {e.Message}");
+            throw new CliException(e.Message);
         }
     }
 
-    /// <summary>Writes through a temporary file in the same folder and renames it over the target, so a file is never half-written.</summary>
+    /// <summary>Replaces a motor list's text atomically, keeping its owner, mode and links (see AtomicWriter).</summary>
     public static void WriteAtomically(string path, string text)
     {
-        var full = Path.GetFullPath(path);
-        var temp = Path.Combine(Path.GetDirectoryName(full)!, $".{Path.GetFileName(full)}.{Environment.ProcessId}.tmp");
         try
         {
-            File.WriteAllBytes(temp, StrictUtf8.GetBytes(text));
-            File.Move(temp, full, overwrite: true);
+            AtomicWriter.WriteText(path, text);
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (FileRefusedException e)
         {
-            File.Delete(temp);
-            throw new CliException($"cannot write '{path}': {e.Message}");
+            throw new CliException(e.Message);
         }
     }
 }

@@ -1,4 +1,5 @@
 using MotorLang.Analysis.Editing;
+using MotorLang.Files;
 using MotorLang.Parser;
 using MotorLang.Server.Documents;
 using MotorLang.Server.Protocol;
@@ -25,11 +26,16 @@ public sealed class WorkspaceIndex(DocumentStore store)
         }
     }
 
+    /// <summary>
+    /// The workspace's lists, read by the same rules as the command line (MotorLang.Files): regular
+    /// files only, at most 64 MB each, each real file once; symlinks leading out of the root are
+    /// skipped, and anything that cannot be read is passed over rather than failing the request.
+    /// </summary>
     private IEnumerable<KeyValuePair<string, ParseResult>> WorkspaceFiles(IEnumerable<string> open, CancellationToken ct)
     {
         if (_root is null || !Directory.Exists(_root)) yield break;
         var skip = open.ToHashSet(StringComparer.Ordinal);
-        foreach (var file in Directory.EnumerateFiles(_root, "*.motors", SearchOption.AllDirectories))
+        foreach (var file in FileSearch.Find(_root, ".motors", stayInside: true, ct).Files)
         {
             ct.ThrowIfCancellationRequested();
             var uri = new Uri(file).AbsoluteUri;
@@ -37,9 +43,9 @@ public sealed class WorkspaceIndex(DocumentStore store)
             string text;
             try
             {
-                text = File.ReadAllText(file);
+                text = SafeReader.ReadText(file);
             }
-            catch (IOException)
+            catch (FileRefusedException)
             {
                 continue;
             }
