@@ -26,6 +26,9 @@ public static class AtomicWriter
     internal static Func<string, string> TempName = target =>
         $".{Path.GetFileName(target)}.{Convert.ToHexStringLower(RandomNumberGenerator.GetBytes(16))}.tmp";
 
+    /// <summary>Runs after the new text is written to the temporary file; tests use it to fail there as a full disk would.</summary>
+    internal static Action<string>? AfterTempWritten;
+
     internal const int Attempts = 8;
 
     public static void WriteText(string path, string text) => Write(path, Utf8.GetBytes(text));
@@ -41,6 +44,7 @@ public static class AtomicWriter
             using (stream)
             {
                 stream.Write(bytes);
+                AfterTempWritten?.Invoke(temp);
                 if (status is { } s) KeepOwnerAndMode(path, stream.SafeFileHandle, s);
                 stream.Flush(flushToDisk: true);
             }
