@@ -5,7 +5,11 @@ namespace MotorLang.Cli.Tests;
 /// <summary>Runs the real motorlang executable (the built dll, through the dotnet host) and captures what it prints.</summary>
 internal static class Executable
 {
-    public static (int Code, string Out, string Err) Run(string workingDirectory, params string[] args)
+    public static (int Code, string Out, string Err) Run(string workingDirectory, params string[] args) =>
+        Run(workingDirectory, new Dictionary<string, string?>(), args);
+
+    /// <summary>Runs with some environment variables set (a null value removes one).</summary>
+    public static (int Code, string Out, string Err) Run(string workingDirectory, IReadOnlyDictionary<string, string?> environment, params string[] args)
     {
         var dll = Path.Combine(AppContext.BaseDirectory, "motorlang.dll");
         var info = new ProcessStartInfo("dotnet", ["exec", dll, .. args])
@@ -16,6 +20,7 @@ internal static class Executable
             RedirectStandardInput = true,
             UseShellExecute = false,
         };
+        foreach (var (name, value) in environment) info.Environment[name] = value;
         using var process = Process.Start(info)!;
         process.StandardInput.Close();
         var stdout = process.StandardOutput.ReadToEndAsync();
@@ -27,6 +32,14 @@ internal static class Executable
         }
 
         return (process.ExitCode, stdout.Result, stderr.Result);
+    }
+
+    /// <summary>Runs a helper program (mkfifo, ln, chown) and fails the test if it fails.</summary>
+    public static void Tool(string file, params string[] args)
+    {
+        using var p = Process.Start(new ProcessStartInfo(file, args) { RedirectStandardOutput = true, RedirectStandardError = true })!;
+        p.WaitForExit();
+        Assert.True(p.ExitCode == 0, $"{file} {string.Join(' ', args)}: {p.StandardError.ReadToEnd()}");
     }
 
     public static void Git(string dir, params string[] args)
