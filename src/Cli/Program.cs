@@ -1,3 +1,4 @@
 using MotorLang.Cli;
 
+DiagnosticEndpoints.RemoveUnlessRequested();
 return CommandLine.Run(args, Console.Out, Console.Error);
