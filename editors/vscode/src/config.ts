@@ -30,6 +30,14 @@ export function resolveServer(settings: ExtensionSettings, extensionDir: string,
     : { command: server, args: ["lsp"] };
 }
 
+/**
+ * The server's environment: the editor's, with the .NET runtime's diagnostics socket and debugger
+ * pipes turned off (DOTNET_EnableDiagnostics=0) unless the user set the variable, e.g. to 1 for profiling.
+ */
+export function serverEnvironment(env: Record<string, string | undefined>): Record<string, string | undefined> {
+  return "DOTNET_EnableDiagnostics" in env ? { ...env } : { ...env, DOTNET_EnableDiagnostics: "0" };
+}
+
 /** The initialization options and configuration the server understands (presentation only). */
 export function serverSettings(settings: ExtensionSettings): { motorlang: object } {
   return {

@@ -12,7 +12,7 @@ import {
   ServerOptions,
   TransportKind,
 } from "vscode-languageclient/node";
-import { commandTarget, ExtensionSettings, findRuntime, resolveServer, runtimeProblem, serverSettings } from "./config";
+import { commandTarget, ExtensionSettings, findRuntime, resolveServer, runtimeProblem, serverEnvironment, serverSettings } from "./config";
 
 let client: LanguageClient | undefined;
 let output: vscode.OutputChannel;
@@ -43,7 +43,7 @@ async function start(context: vscode.ExtensionContext): Promise<void> {
     }
   }
 
-  const serverOptions: ServerOptions = { command: server.command, args: server.args, transport: TransportKind.stdio };
+  const serverOptions: ServerOptions = { command: server.command, args: server.args, transport: TransportKind.stdio, options: { env: serverEnvironment(process.env) } };
   let crashes = 0;
   const clientOptions: LanguageClientOptions = {
     documentSelector: [{ language: "motorlang" }],

@@ -1,7 +1,7 @@
 import assert from "node:assert/strict";
 import * as path from "node:path";
 import { test } from "node:test";
-import { commandTarget, ExtensionSettings, findRuntime, resolveServer, runtimeProblem, serverSettings } from "../config";
+import { commandTarget, ExtensionSettings, findRuntime, resolveServer, runtimeProblem, serverEnvironment, serverSettings } from "../config";
 
 const defaults: ExtensionSettings = {
   serverPath: "",
@@ -57,4 +57,9 @@ test("commands act on their argument, else on the active motor list", () => {
   assert.equal(commandTarget(undefined, "file:///b.motors", "motorlang"), "file:///b.motors");
   assert.equal(commandTarget(undefined, "file:///b.txt", "plaintext"), undefined);
   assert.equal(commandTarget({ toString: () => "file:///c.motors" }, undefined, undefined), "file:///c.motors");
+});
+
+test("the server starts with runtime diagnostics off unless the user set them", () => {
+  assert.deepEqual(serverEnvironment({ PATH: "/bin" }), { PATH: "/bin", DOTNET_EnableDiagnostics: "0" });
+  assert.deepEqual(serverEnvironment({ PATH: "/bin", DOTNET_EnableDiagnostics: "1" }), { PATH: "/bin", DOTNET_EnableDiagnostics: "1" });
 });
