@@ -254,6 +254,23 @@ public class RuleCorrectionTests
         Assert.Contains("    ground 10 AWG", block);
     }
 
+    // Feeder with 14 AWG (too small: 430.24 needs 17.5 A, so its fix writes 12 AWG at 60 C, 20 A) and a
+    // 14 AWG ground on a 35 A breaker: Table 250.122 gives 10 AWG, not larger than the 12 AWG circuit
+    // conductors the fix writes (250.122(A)) -> 12 AWG. Check must ask for 12 AWG now, not pass the
+    // 14 AWG by capping at the wire that is being replaced (it would then fail after size).
+    [Fact]
+    public void Feeder_Ground_Is_Sized_For_The_Corrected_Wire()
+    {
+        var lines = Base.ToList();
+        lines[1] = "  wire 14 AWG";
+        lines[2] = "  ground 14 AWG";
+        var text = Text([.. lines]);
+        var f = Single(text, FindingCodes.GroundUndersized);
+        Assert.Contains("the 12 AWG", f.Message);
+        var sized = SizeAll.Apply(text);
+        Assert.DoesNotContain(Analyzer.Analyze(sized).Findings, x => x.Severity == Severity.Error);
+    }
+
     // --- small things ---------------------------------------------------------------------------------
 
     [Fact]

@@ -231,7 +231,10 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
         // conductors are normally chosen to carry its protective device's rating, so that is the base
         // (common practice, no source). Anything larger counts as upsized.
         var baseline = cache.MinimumWire(Math.Max(r.RequiredAmpacity?.Value ?? 0, device), settings.Conditions, false).Value;
-        r.MinimumGround = Grounding.Minimum(device, settings.Material, r.Wire ?? r.MinimumWire?.Value, baseline, "NEC 250.122(A)");
+        // A feeder wire reported too small counts at the size its fix writes, so check and size give one number.
+        var replaced = r.WireAmpacity?.Value is { } allowable && allowable < (r.RequiredAmpacity?.Value ?? 0) && r.MinimumWire?.Value is not null;
+        var phase = replaced ? r.MinimumWire!.Value : r.Wire ?? r.MinimumWire?.Value;
+        r.MinimumGround = Grounding.Minimum(device, settings.Material, phase, baseline, "NEC 250.122(A)");
         if (r.MinimumGround.Value is not { } min)
         {
             Add(FindingCodes.CannotCheck, Severity.Warning, feeder.Ground?.Range ?? feeder.Header.KeywordToken.Range,
