@@ -105,6 +105,18 @@ public class CoverageTests
     }
 
     [Fact]
+    public void AMotorOver1000VoltsAppliesNothingAndSaysPartXIIsNotChecked()
+    {
+        // NFPA 70-2023 Article 430 Part XI governs motors over 1000 V; MotorLang sizes nothing there (M210).
+        var a = Analyze(Text("feeder MV 4160V 3ph", "  motor P-1 500hp 4000V"));
+        var coverage = CircuitCoverage.For(a.Motors.Values.Single());
+        Assert.Empty(coverage.Applied);
+        Assert.Contains(coverage.NotChecked, n => n.Rule == "Article 430 Part XI");
+        Assert.Contains(CircuitCoverage.For(a.Feeders.Values.Single()).NotChecked, n => n.Rule == "Article 430 Part XI");
+        Assert.DoesNotContain(NotCheckedRules(Plain), r => r == "Article 430 Part XI");
+    }
+
+    [Fact]
     public void ALineHoverLeavesTheCoverageToTheWholeMotor()
     {
         var analysis = Analyze(Plain);

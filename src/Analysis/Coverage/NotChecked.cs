@@ -15,8 +15,10 @@ public enum Reach
     EveryFeeder,
     /// <summary>Motors and feeders whose running voltage drop was not worked out (no <c>length</c> written).</summary>
     NoLength,
-    /// <summary>Motors whose written conduit's fill was not worked out (none written).</summary>
+    /// <summary>Motors and feeders whose written conduit's fill was not worked out (none written, or the tables cannot).</summary>
     NoConduit,
+    /// <summary>Motors and feeders over 1000 V, which MotorLang does not size at all.</summary>
+    OverThousandVolts,
 }
 
 /// <summary>A rule that bears on a circuit but that MotorLang does not check: the rule, what it covers (one line), and why it is left out.</summary>
@@ -62,6 +64,8 @@ public static class NotChecked
             "no 'length' is written (or no wire could be chosen), so there is nothing to work it out from", Reach.NoLength),
         new("Chapter 9 Table 1", "fill of the conduit as installed",
             "no 'conduit' is written, or its fill cannot be worked out (the hover shows the smallest that fits, where it can)", Reach.NoConduit),
+        new("Article 430 Part XI", "motors and feeders over 1000 V: their conductors, protection and controllers",
+            "MotorLang carries only the low-voltage rules and tables, so nothing on such a circuit is sized (M210)", Reach.OverThousandVolts),
         new("430.28, 240.21", "feeder taps", "the list has no tap conductors", Reach.EveryFeeder),
         new("450.3", "transformer overcurrent protection", "transformers are not part of the list", Reach.EveryFeeder),
         new("215.10, 240.13", "ground-fault protection of equipment for feeder devices of 1000 A or more",
@@ -79,6 +83,7 @@ public static class NotChecked
         Reach.DriveFedMotor => motor.StartingMethod == StartingMethod.Drive,
         Reach.NoLength => motor.BranchDrop?.HasValue != true,
         Reach.NoConduit => motor.ConduitFillPercent is null,
+        Reach.OverThousandVolts => Math.Max(motor.RatedVolts, motor.Volts) > SystemVoltages.LowVoltageLimit,
         _ => false,
     }).ToList();
 
@@ -87,6 +92,8 @@ public static class NotChecked
     {
         Reach.EveryCircuit or Reach.EveryFeeder => true,
         Reach.NoLength => feeder.Drop?.HasValue != true,
+        Reach.NoConduit => feeder.ConduitFillPercent is null,
+        Reach.OverThousandVolts => feeder.Volts > SystemVoltages.LowVoltageLimit,
         _ => false,
     }).ToList();
 
@@ -97,7 +104,8 @@ public static class NotChecked
         Reach.EveryMotor => "every motor",
         Reach.DriveFedMotor => "motors fed by a drive",
         Reach.NoLength => "motors and feeders with no `length`",
-        Reach.NoConduit => "motors with no `conduit`",
+        Reach.NoConduit => "motors and feeders with no `conduit`",
+        Reach.OverThousandVolts => "motors and feeders over 1000 V",
         _ => "every feeder",
     };
 }

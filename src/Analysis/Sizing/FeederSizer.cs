@@ -28,20 +28,20 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
         r.Phases = phases.Value;
         var settings = Settings.For(feeder, model);
         var supplied = Downstream(feeder).ToList();
+        var motorResults = supplied.SelectMany(f => f.Motors).Select(m => motors.GetValueOrDefault(m)).OfType<MotorResult>().ToList();
+        if (r.Volts > SystemVoltages.LowVoltageLimit)
+        {
+            findings.Add(new Finding(FindingCodes.OutsideScope, Severity.Warning, volts.Range,
+                "feeders over 1000 V are not sized by MotorLang (Article 430 Part XI governs their motors): nothing on this feeder is checked"));
+            return r;
+        }
+
         // Currents at another voltage cannot be added: a feeder supplied at another voltage is behind a transformer.
         if (supplied.FirstOrDefault(f => f.Voltage is { } v && f.Phases is { } p && (v.Value.Value != r.Volts || p.Value != r.Phases)) is { } other)
         {
             Add(FindingCodes.SuppliesAnotherVoltage, Severity.Warning, feeder.Header.KeywordToken.Range,
                 $"the feeder cannot be sized: {other.Tag?.Value} ({other.Voltage?.Value}) is supplied from it at another voltage, so through a transformer, " +
                 "whose load and protection (NEC 450.3) MotorLang does not work out");
-            return r;
-        }
-
-        var motorResults = supplied.SelectMany(f => f.Motors).Select(m => motors.GetValueOrDefault(m)).OfType<MotorResult>().ToList();
-        if (r.Volts > SystemVoltages.LowVoltageLimit)
-        {
-            findings.Add(new Finding(FindingCodes.OutsideScope, Severity.Warning, volts.Range,
-                "feeders over 1000 V are not sized by MotorLang (Article 430 Part XI governs their motors): nothing on this feeder is checked"));
             return r;
         }
 
