@@ -1,4 +1,5 @@
 using System.CommandLine;
+using MotorLang.Parser;
 using MotorLang.Parser.Formatting;
 
 namespace MotorLang.Cli;
@@ -19,7 +20,15 @@ public static class FormatCommand
             foreach (var file in SourceFiles.Expand(result.GetValue(paths)!, stderr))
             {
                 var text = SourceFiles.Read(file);
-                var formatted = Formatter.Format(text);
+                var parsed = DocumentParser.Parse(text);
+                if (FrozenLines.IsUnreadable(parsed))
+                {
+                    // Nothing of it was read, so nothing of it is written: say so rather than stay silent.
+                    stderr.WriteLine($"{file}: not formatted: {parsed.Diagnostics[0].Message}");
+                    continue;
+                }
+
+                var formatted = Formatter.Format(parsed);
                 if (!formatted.Verified)
                 {
                     stderr.WriteLine($"{file}: not formatted: the formatted text did not read back the same (please report this)");

@@ -90,8 +90,8 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
             var message = parent.Kind == BlockKind.Root
                 ? $"unexpected indentation: nothing above opens a block; 'project' and 'feeder' start at column 1"
                 : $"indentation of {indent} spaces does not match the {parent.ChildIndent} of the lines above in this {parent.Kind.ToString().ToLowerInvariant()}";
-            // The line is read as a child of this block and keeps its statement, so the
-            // formatter can put it at the block's indentation and so mend the error.
+            // The line is read as a child of this block and keeps its statement, so the model
+            // still has it; the formatter leaves it as written, like every line with a diagnostic.
             Error(SyntaxCodes.BadIndentation, SourceRange.OnLine(line.Index, 0, Math.Max(indent, 1)), message);
         }
 

@@ -4,9 +4,12 @@ using MotorLang.Parser.Syntax;
 namespace MotorLang.Parser.Formatting;
 
 /// <summary>
-/// What formatting must not change: every comment and every statement's canonical tokens, in
-/// order, and the block depth of each statement. Whitespace, unit spelling and keyword case are
-/// not part of it.
+/// What formatting must not change: every comment, every statement's canonical tokens, in order,
+/// the block depth of each statement, and the text of every line that was not read as a
+/// statement (an unreadable document is one such line). Whitespace around tokens, unit spelling
+/// and keyword case are not part of it. The formatter's own read-back check is stricter
+/// (<see cref="ReadBack"/>); this one compares two readings of the same text, e.g. after an
+/// incremental re-parse.
 /// </summary>
 public static class Fingerprint
 {
@@ -19,7 +22,7 @@ public static class Fingerprint
         var entries = new List<Entry>();
         foreach (var line in parsed.Tree.Lines)
         {
-            if (line.Tokens.Length > 0) entries.Add(new Entry(Depth(line), Text(line)));
+            if (HasText(line)) entries.Add(new Entry(Depth(line), Text(line)));
             if (line.Comment is { } c) entries.Add(new Entry(-1, c.Text));
         }
 
@@ -48,8 +51,8 @@ public static class Fingerprint
             var d1 = Depth(l1);
             var d2 = Depth(l2);
             if (d1 != d2 && d1 >= 0 && d2 >= 0) return false;
-            if (l1.Tokens.Length > 0 != l2.Tokens.Length > 0) return false;
-            if (l1.Tokens.Length == 0) continue;
+            if (HasText(l1) != HasText(l2)) return false;
+            if (!HasText(l1)) continue;
             sa.Clear();
             sb.Clear();
             AppendText(sa, l1);
@@ -62,7 +65,11 @@ public static class Fingerprint
         a.Count == b.Count && a.Zip(b).All(p => p.First.Text == p.Second.Text
                                                 && (p.First.Depth == p.Second.Depth || p.First.Depth < 0 || p.Second.Depth < 0));
 
-    private static IEnumerable<SyntaxLine> Meaningful(SyntaxTree tree) => tree.Lines.Where(l => l.Tokens.Length > 0 || l.Comment is not null);
+    private static IEnumerable<SyntaxLine> Meaningful(SyntaxTree tree) => tree.Lines.Where(l => HasText(l) || l.Comment is not null);
+
+    /// <summary>Tokens, or (on a line that was not read) anything but spaces and tabs.</summary>
+    private static bool HasText(SyntaxLine line) =>
+        line.Tokens.Length > 0 || (line.Comment is null && line.ContentSpan.IndexOfAnyExcept(' ', '\t') >= 0);
 
     private static int Depth(SyntaxLine line) => line.IsBroken || line.InConflict ? -1 : line.Depth;
 

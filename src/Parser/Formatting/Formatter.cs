@@ -15,8 +15,10 @@ public sealed record FormatResult(string Text, IReadOnlyList<TextEdit> Edits, bo
 /// Writes each well-formed line in its canonical form: two spaces per block level, one space
 /// between values, units and keywords spelled one way, an end-of-line comment kept in its column
 /// (or two spaces after the code when the code has grown past it), at most one blank line in a
-/// row. Lines with errors, and lines under them, are left exactly as they are. Lines are never
-/// reordered and comments are never touched.
+/// row. Lines are never reordered, comments and descriptions never touched, and only lines of
+/// nothing but spaces and tabs are ever removed. A line that carries a diagnostic, or that the
+/// parser could not read, is left byte for byte as written (<see cref="FrozenLines"/>); so is a
+/// whole document that was not read (P018, P019).
 /// </summary>
 public static class Formatter
 {
@@ -27,24 +29,20 @@ public static class Formatter
     /// <summary>Formats the whole document, or only lines <paramref name="firstLine"/>..<paramref name="lastLine"/> (inclusive).</summary>
     public static FormatResult Format(ParseResult parsed, int firstLine = 0, int lastLine = int.MaxValue)
     {
-        var result = FormatOnce(parsed, firstLine, lastLine);
-        var wholeDocument = firstLine == 0 && lastLine == int.MaxValue;
-        if (!result.Changed || !wholeDocument || !parsed.Diagnostics.Any(d => d.Code == Diagnostics.SyntaxCodes.BadIndentation))
-            return result;
+        var tree = parsed.Tree;
+        // Nothing of an unreadable document was read, so there is nothing the formatter may write.
+        if (FrozenLines.IsUnreadable(parsed)) return new FormatResult(tree.Text, [], true);
 
-        // Re-indenting one line can mend another line's indentation error, which the next pass then
-        // formats. A few passes reach the fixed point, so formatting twice changes nothing.
-        var text = result.Text;
-        for (var pass = 0; pass < 3; pass++)
-        {
-            var next = FormatOnce(DocumentParser.Parse(text), 0, int.MaxValue);
-            if (!next.Changed || !next.Verified) break;
-            text = next.Text;
-        }
-
-        if (text == result.Text) return result;
-        if (!Fingerprint.Same(DocumentParser.Parse(text), parsed)) return result;
-        return new FormatResult(text, [WholeDocument(parsed.Tree, text)], true);
+        var frozen = FrozenLines.Of(parsed);
+        // A document of nothing but blank lines has nothing to format; emptying it would look like a lost file.
+        if (LastNonBlank(tree.Lines, frozen) < 0) return new FormatResult(tree.Text, [], true);
+        // Re-indenting a line can change how a neighbouring line that has an error is read (a
+        // misplaced motor becomes a valid one). The read-back check catches that; the lines are
+        // then formatted within themselves, each keeping its indentation, which cannot move a
+        // line into another block.
+        return FormatOnce(parsed, frozen, firstLine, lastLine, reindent: true)
+               ?? FormatOnce(parsed, frozen, firstLine, lastLine, reindent: false)
+               ?? new FormatResult(tree.Text, [], false);
     }
 
     /// <summary>The statement as the formatter writes it, without indentation or comment.</summary>
@@ -68,20 +66,21 @@ public static class Formatter
         return sb;
     }
 
-    private static FormatResult FormatOnce(ParseResult parsed, int firstLine, int lastLine)
+    /// <summary>One formatting of the document; null when the result does not read back as the same document.</summary>
+    private static FormatResult? FormatOnce(ParseResult parsed, bool[] frozen, int firstLine, int lastLine, bool reindent)
     {
         var tree = parsed.Tree;
         var lines = tree.Lines;
-        // Per line: null keeps the line as it is; "" with Delete removes it; anything else replaces its content.
-        var replacement = new string?[lines.Length];
-        var delete = new bool[lines.Length];
-        var lastContent = LastNonBlank(lines);
+        // Per line: null keeps the line as it is; Delete removes it; anything else replaces its content.
+        var replacement = new string?[lines.Count];
+        var delete = new bool[lines.Count];
+        var lastContent = LastNonBlank(lines, frozen);
         var previousBlank = true; // so blank lines at the start of the file go
         var sb = new StringBuilder(128);
-        for (var i = 0; i < lines.Length; i++)
+        for (var i = 0; i < lines.Count; i++)
         {
             var line = lines[i];
-            var blank = line.Kind == LineKind.Blank && !line.InConflict;
+            var blank = !frozen[i] && IsBlank(line);
             if (i < firstLine || i > lastLine)
             {
                 previousBlank = blank;
@@ -90,8 +89,9 @@ public static class Formatter
 
             if (blank)
             {
-                // The empty pseudo-line after a final newline stays, or the file would lose it.
-                var eof = i == lines.Length - 1 && line.LineEnding.Length == 0;
+                // The last line (empty after a final newline, or blanks without one) is emptied, never
+                // removed: removing it would leave the line before it last, changing the line count.
+                var eof = i == lines.Count - 1 && line.LineEnding.Length == 0;
                 if (!eof && (previousBlank || i > lastContent)) delete[i] = true;
                 else if (line.Length > 0) replacement[i] = "";
                 previousBlank = true;
@@ -99,9 +99,9 @@ public static class Formatter
             }
 
             previousBlank = false;
-            if (line.IsBroken || line.InConflict) continue;
+            if (frozen[i] || (line.Statement is null && line.Comment is null)) continue;
             sb.Clear();
-            AppendLine(sb, line, lines, i);
+            AppendLine(sb, line, lines, i, frozen, reindent);
             if (!sb.Equals(line.ContentSpan)) replacement[i] = sb.ToString();
         }
 
@@ -110,34 +110,47 @@ public static class Formatter
 
         var output = new StringBuilder(tree.Text.Length);
         if (tree.HasBom) output.Append('\uFEFF');
-        for (var i = 0; i < lines.Length; i++)
+        var kept = new List<int>(lines.Count);
+        var rewritten = new bool[lines.Count];
+        for (var i = 0; i < lines.Count; i++)
         {
             if (delete[i]) continue;
-            if (replacement[i] is { } r) output.Append(r);
+            kept.Add(i);
+            if (replacement[i] is { } r)
+            {
+                output.Append(r);
+                rewritten[i] = true;
+            }
             else output.Append(lines[i].ContentSpan);
+
             output.Append(lines[i].LineEnding);
         }
 
         var formatted = output.ToString();
-        // Re-read what we wrote: if it does not describe the same document, give nothing back.
-        return Fingerprint.Same(DocumentParser.Parse(formatted), parsed)
+        // Re-read what we wrote: if it does not describe the same document, line by line, give nothing back.
+        return ReadBack.Same(parsed, DocumentParser.Parse(formatted), kept, frozen, rewritten)
             ? new FormatResult(formatted, edits, true)
-            : new FormatResult(tree.Text, [], false);
+            : null;
     }
 
-    private static void AppendLine(StringBuilder sb, SyntaxLine line, IReadOnlyList<SyntaxLine> lines, int index)
+    /// <summary>Only spaces and tabs: the one kind of line the formatter may remove or empty.</summary>
+    private static bool IsBlank(SyntaxLine line) =>
+        line.Kind == LineKind.Blank && !line.InConflict && line.ContentSpan.IndexOfAnyExcept(' ', '\t') < 0;
+
+    private static void AppendLine(StringBuilder sb, SyntaxLine line, IReadOnlyList<SyntaxLine> lines, int index, bool[] frozen, bool reindent)
     {
         if (line.Statement is not { } statement)
         {
             // A comment-only line takes the indentation of the statement it introduces.
-            var depth = NextDepth(lines, index);
+            var depth = reindent ? NextDepth(lines, index, frozen) : -1;
             if (depth >= 0) AppendIndent(sb, depth);
             else sb.Append(line.ContentSpan[..line.IndentWidth]);
             sb.Append(line.Comment!.Value.Text);
             return;
         }
 
-        AppendIndent(sb, line.Depth);
+        if (reindent) AppendIndent(sb, line.Depth);
+        else sb.Append(line.ContentSpan[..line.IndentWidth]);
         AppendCanonical(sb, statement);
         if (line.Comment is not { } comment) return;
         // Comments aligned in a column stay in that column while the code fits before it.
@@ -150,23 +163,24 @@ public static class Formatter
         for (var d = 0; d < depth; d++) sb.Append(IndentUnit);
     }
 
-    private static int NextDepth(IReadOnlyList<SyntaxLine> lines, int index)
+    /// <summary>The depth of the next statement, or -1 (keep the comment where it is) when that statement is left as written.</summary>
+    private static int NextDepth(IReadOnlyList<SyntaxLine> lines, int index, bool[] frozen)
     {
         for (var j = index + 1; j < lines.Count; j++)
         {
             var l = lines[j];
-            if (l.Kind == LineKind.Statement) return l.IsBroken ? -1 : l.Depth;
-            if (l.InConflict) return -1;
+            if (l.Kind == LineKind.Statement) return frozen[j] || l.Depth < 0 ? -1 : l.Depth;
+            if (l.InConflict || (frozen[j] && l.Kind != LineKind.Comment)) return -1;
         }
 
         return 0;
     }
 
-    private static int LastNonBlank(IReadOnlyList<SyntaxLine> lines)
+    private static int LastNonBlank(IReadOnlyList<SyntaxLine> lines, bool[] frozen)
     {
         for (var i = lines.Count - 1; i >= 0; i--)
         {
-            if (lines[i].Kind != LineKind.Blank || lines[i].InConflict) return i;
+            if (frozen[i] || !IsBlank(lines[i])) return i;
         }
 
         return -1;
@@ -185,12 +199,5 @@ public static class Formatter
         }
 
         return edits;
-    }
-
-    private static TextEdit WholeDocument(SyntaxTree tree, string text)
-    {
-        var last = tree.Lines[^1];
-        var end = new TextPosition(last.Index, last.Length);
-        return new TextEdit(new SourceRange(new TextPosition(0, 0), end), tree.HasBom ? text[1..] : text);
     }
 }
