@@ -1,6 +1,7 @@
 using System.Text.Encodings.Web;
 using System.Text.Json;
 using System.Text.Json.Serialization;
+using MotorLang.Server.Transport;
 using StreamJsonRpc;
 
 namespace MotorLang.Server;
@@ -24,16 +25,20 @@ public static class LanguageServer
     public static async Task<int> RunAsync(Stream input, Stream output, TextWriter log, TimeSpan? debounce = null)
     {
         var formatter = new SystemTextJsonFormatter { JsonSerializerOptions = JsonOptions() };
-        using var rpc = new JsonRpc(new HeaderDelimitedMessageHandler(output, input, formatter));
         var serverLog = new ServerLog(log);
-        var target = new LanguageServerTarget(rpc, serverLog, debounce ?? DefaultDebounce);
+        var lifecycle = new ProtocolLifecycle();
+        using var handler = new TolerantMessageHandler(input, output, formatter, lifecycle, serverLog.Local);
+        using var rpc = new ServerJsonRpc(handler, serverLog.Local);
+        var target = new LanguageServerTarget(rpc, serverLog, lifecycle, debounce ?? DefaultDebounce);
         rpc.AddLocalRpcTarget(target, new JsonRpcTargetOptions { DisposeOnDisconnect = false });
         serverLog.Attach(rpc);
         rpc.StartListening();
         var finished = await Task.WhenAny(rpc.Completion, target.Exited);
         if (finished == rpc.Completion)
         {
-            serverLog.Info("the client closed the connection");
+            // Only the end of the input means the client went away; anything else is our failure to write.
+            if (handler.ReachedEndOfInput) serverLog.Info("the client closed the connection");
+            else serverLog.Local($"the connection failed: {rpc.Completion.Exception?.InnerException?.Message ?? "writing to the client failed"}");
             return target.Exited.IsCompleted ? await target.Exited : 1;
         }
 

@@ -6,6 +6,7 @@ using MotorLang.Parser.Text;
 using MotorLang.Server.Documents;
 using MotorLang.Server.Features;
 using MotorLang.Server.Protocol;
+using MotorLang.Server.Transport;
 using StreamJsonRpc;
 using Convert = MotorLang.Server.Features.Convert;
 using LspRange = MotorLang.Server.Protocol.Range;
@@ -27,15 +28,16 @@ public sealed class LanguageServerTarget
     private readonly ServerLog _log;
     private readonly MemoryTrimmer _trimmer;
     private readonly TaskCompletionSource<int> _exit = new(TaskCreationOptions.RunContinuationsAsynchronously);
+    private readonly ProtocolLifecycle _lifecycle;
     private PresentationSettings _presentation = new();
-    private bool _shutdown;
 
     /// <summary>Whether the client asks for a code action's edit only when the user picks it (codeAction/resolve).</summary>
     private bool _resolvesEdits;
 
-    internal LanguageServerTarget(JsonRpc rpc, ServerLog log, TimeSpan debounce)
+    internal LanguageServerTarget(JsonRpc rpc, ServerLog log, ProtocolLifecycle lifecycle, TimeSpan debounce)
     {
         _log = log;
+        _lifecycle = lifecycle;
         _workspace = new WorkspaceIndex(_store);
         _trimmer = new MemoryTrimmer(TimeSpan.FromSeconds(2), 48L << 20, m => _log.Info(m));
         _diagnostics = new DiagnosticScheduler(p =>
@@ -84,15 +86,12 @@ public sealed class LanguageServerTarget
     {
     }
 
+    /// <summary>The transport has already marked the lifecycle as shut down, in arrival order, and refuses later requests.</summary>
     [JsonRpcMethod("shutdown")]
-    public object? Shutdown()
-    {
-        _shutdown = true;
-        return null;
-    }
+    public object? Shutdown() => null;
 
     [JsonRpcMethod("exit")]
-    public void Exit() => _exit.TrySetResult(_shutdown ? 0 : 1);
+    public void Exit() => _exit.TrySetResult(_lifecycle.ShutdownRequested ? 0 : 1);
 
     [JsonRpcMethod("$/setTrace", UseSingleObjectParameterDeserialization = true)]
     public void SetTrace(SetTraceParams p) => Notify(() => _log.Trace = p.Value);

@@ -21,9 +21,18 @@ internal sealed class ServerLog(TextWriter stderr)
 
     public void Error(string message) => Write(1, message);
 
-    private void Write(int type, string message)
+    /// <summary>
+    /// To stderr only: protocol errors (the client already gets an error response, and before
+    /// 'initialize' the server may not send it notifications) and failures of the connection itself.
+    /// </summary>
+    public void Local(string message)
     {
         lock (stderr) stderr.WriteLine($"[{DateTime.UtcNow:HH:mm:ss.fff}] {message}");
+    }
+
+    private void Write(int type, string message)
+    {
+        Local(message);
         if (_rpc is null) return;
         try
         {

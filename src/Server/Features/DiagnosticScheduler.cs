@@ -7,11 +7,15 @@ namespace MotorLang.Server.Features;
 /// <summary>
 /// Publishes diagnostics after each change, once typing pauses for the debounce interval. A newer
 /// change cancels the pending run for the same document, so a stale analysis is never published.
+/// "Newer" is the order in which changes arrived, not the client's version number: a client may
+/// send version 3 after version 5, the store then holds version 3's text, and its diagnostics are
+/// the ones that must be shown.
 /// </summary>
 public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> publish, TimeSpan debounce, Action<string> log)
 {
     private readonly ConcurrentDictionary<string, CancellationTokenSource> _pending = new(StringComparer.Ordinal);
-    private readonly Dictionary<string, int> _published = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, long> _published = new(StringComparer.Ordinal);
+    private long _sequence;
     private readonly SemaphoreSlim _publishing = new(1, 1);
 
     public void Schedule(DocumentSnapshot snapshot)
@@ -24,7 +28,8 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
             return cts;
         });
         previous?.Cancel();
-        _ = RunAsync(snapshot, cts);
+        // Called synchronously by the document notifications, so this number follows arrival order.
+        _ = RunAsync(snapshot, Interlocked.Increment(ref _sequence), cts);
     }
 
     /// <summary>Cancels pending work and clears the document's diagnostics (on close).</summary>
@@ -43,7 +48,7 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
         }
     }
 
-    private async Task RunAsync(DocumentSnapshot snapshot, CancellationTokenSource cts)
+    private async Task RunAsync(DocumentSnapshot snapshot, long sequence, CancellationTokenSource cts)
     {
         var ct = cts.Token;
         try
@@ -52,13 +57,13 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
             var analysis = await Task.Run(() => snapshot.Analysis, ct);
             if (ct.IsCancellationRequested) return;
             var diagnostics = analysis.Findings.Select(f => Convert.ToLsp(f, snapshot.Uri)).ToArray();
-            // One publication at a time, and never an older version after a newer one: an analysis
+            // One publication at a time, and never an earlier change after a later one: an analysis
             // that lost the race to its cancellation must not overwrite fresher diagnostics.
             await _publishing.WaitAsync(CancellationToken.None);
             try
             {
-                if (ct.IsCancellationRequested || (_published.TryGetValue(snapshot.Uri, out var last) && last > snapshot.Version)) return;
-                _published[snapshot.Uri] = snapshot.Version;
+                if (ct.IsCancellationRequested || (_published.TryGetValue(snapshot.Uri, out var last) && last > sequence)) return;
+                _published[snapshot.Uri] = sequence;
                 await publish(new PublishDiagnosticsParams(snapshot.Uri, snapshot.Version, diagnostics));
             }
             finally
