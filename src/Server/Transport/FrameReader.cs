@@ -37,7 +37,7 @@ internal sealed class FrameReader(Stream input, int maxBodyBytes = FrameReader.D
             // End of input, between messages or inside a header: either way nothing is left to answer.
             if (await ReadLineAsync(ct) is not { } line) return new Frame.EndOfInput();
             var lineStart = line.Start;
-            if (line.TooLong) return await BrokenAsync($"a header line is longer than {MaxHeaderLine} bytes", lineStart, ct);
+            if (line.TooLong) return await BrokenAsync($"a header line is longer than {MaxHeaderLine} bytes", lineStart + 1, ct);
             var text = line.Text;
             if (text.Length == 0)
             {
@@ -51,18 +51,18 @@ internal sealed class FrameReader(Stream input, int maxBodyBytes = FrameReader.D
                 break;
             }
 
-            if (lines >= MaxHeaderLines) return await BrokenAsync($"more than {MaxHeaderLines} header lines", lineStart, ct);
+            if (lines >= MaxHeaderLines) return await BrokenAsync($"more than {MaxHeaderLines} header lines", lineStart + 1, ct);
             var colon = text.IndexOf(':');
             // A header that garbage ran into ("xyzContent-Length: 5") must not pass as an unknown
             // header, or the message behind it would be lost: resynchronise on it instead.
             if (colon <= 0 || !IsToken(text.AsSpan(0, colon)) || text.IndexOf("content-length:", StringComparison.OrdinalIgnoreCase) > 0)
-                return await BrokenAsync($"'{Shorten(text)}' is not a header line", lineStart, ct);
+                return await BrokenAsync($"'{Shorten(text)}' is not a header line", lineStart + 1, ct);
             var name = text[..colon].Trim();
             var value = text[(colon + 1)..].Trim();
             if (name.Equals("Content-Length", StringComparison.OrdinalIgnoreCase))
             {
                 if (value.Length == 0 || value.Length > 18 || !value.All(char.IsAsciiDigit) || (length is { } seen && seen != long.Parse(value)))
-                    return await BrokenAsync($"'{Shorten(text)}' is not a valid Content-Length", lineStart, ct);
+                    return await BrokenAsync($"'{Shorten(text)}' is not a valid Content-Length", lineStart + 1, ct);
                 length = long.Parse(value);
             }
             else if (name.Equals("Content-Type", StringComparison.OrdinalIgnoreCase))
@@ -108,13 +108,14 @@ internal sealed class FrameReader(Stream input, int maxBodyBytes = FrameReader.D
     }
 
     /// <summary>
-    /// Skips to the next "Content-Length:" after the first byte at <paramref name="from"/> (a
-    /// position still in the buffer), then reports the problem. Starting just past the bad line's
-    /// first byte finds a header that garbage on the same line ran into.
+    /// Skips to the next "Content-Length:" at or after <paramref name="from"/> (a position still in
+    /// the buffer), then reports the problem. After a bad line, <paramref name="from"/> is one byte
+    /// past its start, which finds a header that garbage on the same line ran into; after a bad
+    /// header block, it is where the block ended, so a header right behind it is not missed.
     /// </summary>
     private async ValueTask<Frame> BrokenAsync(string reason, int from, CancellationToken ct)
     {
-        _start = Math.Min(from + 1, _end);
+        _start = Math.Min(from, _end);
         while (true)
         {
             var found = IndexOfHeader(_buffer.AsSpan(_start, _end - _start));
