@@ -1,6 +1,5 @@
 using System.Collections.Immutable;
 using MotorLang.Analysis.Findings;
-using MotorLang.Analysis.Resolution;
 using MotorLang.Parser.Diagnostics;
 using MotorLang.Parser.Model;
 
@@ -25,9 +24,28 @@ internal static class UpdateScope
 
         var resize = new HashSet<MotorNode>(changed);
         if (changed.Count == 0) return resize;
+
+        // Walk the 'like' references backwards from the changed motors, once: a motor whose chain
+        // reaches a changed one is reached from it. Linear in the number of 'like' users, where
+        // walking every user's chain forwards would be quadratic on a long chain.
+        var likedBy = new Dictionary<MotorNode, List<MotorNode>>();
         foreach (var user in likeUsers)
         {
-            if (Likes.Chain(user, model).Skip(1).Any(changed.Contains)) resize.Add(user);
+            if (user.Like is { } like && model.Find(like.Value) is MotorNode target)
+            {
+                if (!likedBy.TryGetValue(target, out var users)) likedBy[target] = users = [];
+                users.Add(user);
+            }
+        }
+
+        var pending = new Stack<MotorNode>(changed);
+        while (pending.Count > 0)
+        {
+            if (!likedBy.TryGetValue(pending.Pop(), out var users)) continue;
+            foreach (var user in users)
+            {
+                if (resize.Add(user)) pending.Push(user);
+            }
         }
 
         return resize;

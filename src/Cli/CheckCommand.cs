@@ -20,8 +20,10 @@ public static class CheckCommand
         command.SetAction(result =>
         {
             var files = SourceFiles.Expand(result.GetValue(paths)!, stderr);
-            var reports = Analyze(files, stderr);
-            var all = reports.SelectMany(r => r.Findings).ToList();
+            var full = Analyze(files, stderr);
+            // Totals and the exit code count every finding; each file shows at most FindingCap.MaxShown.
+            var all = full.SelectMany(r => r.Findings).ToList();
+            var reports = full.Select(r => (r.File, FindingCap.Shown(r.Findings))).ToList();
             switch (result.GetValue(format))
             {
                 case "json":

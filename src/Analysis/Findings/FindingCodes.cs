@@ -36,4 +36,5 @@ public static class FindingCodes
     public const string SmallConductorConditions = "M211";
 
     public const string NotWritten = "M301";
+    public const string NotShown = "M310";
 }

@@ -39,28 +39,48 @@ public sealed record Settings(
         return false;
     }
 
-    public static Settings For(BlockNode block, MotorList model)
-    {
-        var chain = new List<BlockNode>();
-        for (BlockNode? b = block; b is not null; b = b.Parent) chain.Add(b);
-        if (block is MotorNode motor)
-        {
-            // A motor written "like" another takes that motor's own settings before its feeder's.
-            chain.InsertRange(1, Likes.Chain(motor, model).Skip(1));
-        }
+    public static Settings For(BlockNode block, MotorList model) => For(block, model, null);
 
-        T Pick<T>(Func<BlockNode, Located<T>?> get, T fallback)
+    /// <summary>
+    /// As <see cref="For(BlockNode, MotorList)"/>; with <paramref name="likes"/>, a motor's chain of
+    /// 'like' motors is read through its remembered lookups, so long chains stay linear.
+    /// </summary>
+    internal static Settings For(BlockNode block, MotorList model, LikeResolver? likes)
+    {
+        // The block, then (for a motor written "like" another) that motor's own settings before its feeder's, then the parents.
+        (Located<T> Value, BlockNode Block)? First<T>(Func<BlockNode, Located<T>?> get)
         {
-            foreach (var b in chain)
+            var parents = block;
+            if (block is MotorNode { Like: not null } motor)
             {
-                if (get(b) is { } v) return v.Value;
+                if (likes is not null)
+                {
+                    if (likes.Get<T>(motor, get) is { } found) return (found.Value, found.Owner);
+                }
+                else
+                {
+                    foreach (var m in Likes.Chain(motor, model))
+                    {
+                        if (get(m) is { } v) return (v, m);
+                    }
+                }
+
+                parents = block.Parent;
             }
 
-            return fallback;
+            for (var b = parents; b is not null; b = b.Parent)
+            {
+                if (get(b) is { } v) return (v, b);
+            }
+
+            return null;
         }
 
+        T Pick<T>(Func<BlockNode, Located<T>?> get, T fallback) => First(get) is { } found ? found.Value.Value : fallback;
+
+        // The conductor's material, insulation and ratings come together from the first block that names a material.
+        var conductorBlock = First(static b => b.Material)?.Block;
         var d = Defaults;
-        var conductorBlock = chain.FirstOrDefault(b => b.Material is not null);
         return new Settings(
             Pick(b => b.Ambient, new Quantity(d.AmbientCelsius, Unit.Celsius)) is var amb ? Conversions.Celsius(amb) : d.AmbientCelsius,
             conductorBlock?.Material?.Value ?? d.Material,

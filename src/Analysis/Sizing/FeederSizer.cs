@@ -26,6 +26,14 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
         if (feeder.Voltage is not { } volts || feeder.Phases is not { } phases) return r;
         r.Volts = volts.Value.Value;
         r.Phases = phases.Value;
+        if (OnCycle(feeder))
+        {
+            // Its load would include itself: nothing it carries can be added up (conservative: size nothing).
+            findings.Add(new Finding(FindingCodes.CannotCheck, Severity.Warning, feeder.Header.KeywordToken.Range,
+                "the feeder cannot be sized: its chain of 'from' goes round in a circle (P016), so the load it carries is not defined"));
+            return r;
+        }
+
         var settings = Settings.For(feeder, model);
         var supplied = Downstream(feeder).ToList();
         var motorResults = supplied.SelectMany(f => f.Motors).Select(m => motors.GetValueOrDefault(m)).OfType<MotorResult>().ToList();
@@ -136,19 +144,74 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
             Add(FindingCodes.CannotCheck, Severity.Warning, length.Range, $"the feeder voltage drop cannot be worked out: {why}");
     }
 
-    /// <summary>Drop from the source to this feeder's load end: its own and that of each feeder it is supplied from.</summary>
-    public decimal CumulativeDrop(FeederNode feeder, IReadOnlyDictionary<FeederNode, FeederResult> feeders)
+    private readonly Dictionary<FeederNode, decimal> _cumulative = [];
+    private Dictionary<FeederNode, List<FeederNode>>? _suppliedFrom;
+    private HashSet<FeederNode>? _onCycle;
+
+    private bool OnCycle(FeederNode feeder)
     {
-        var own = feeders.GetValueOrDefault(feeder)?.Drop?.Value?.Percent ?? 0;
-        if (feeder.From is null) return own;
-        decimal total = 0;
-        var seen = new HashSet<FeederNode>();
-        for (FeederNode? f = feeder; f is not null && seen.Add(f); f = Supplier(f, model))
+        if (feeder.From is null) return false;
+        if (_onCycle is null)
         {
-            total += feeders.GetValueOrDefault(f)?.Drop?.Value?.Percent ?? 0;
+            var steps = Steps;
+            _onCycle = ReferenceCycles.Members(model.Feeders, f => Supplier(f, model), ref steps);
+            Steps = steps;
         }
 
-        return total;
+        return _onCycle.Contains(feeder);
+    }
+
+    /// <summary>Feeders visited while working out drops from the source and what feeders supply; tests use it to check the work grows linearly.</summary>
+    internal long Steps { get; private set; }
+
+    /// <summary>
+    /// Drop from the source to this feeder's load end: its own and that of each feeder it is
+    /// supplied from (once round a cycle of 'from', which is reported as an error). Remembered per
+    /// feeder and worked out without recursion, so a chain of n feeders costs n steps, not n².
+    /// Call it once every feeder is sized: it remembers the drops it has added up.
+    /// </summary>
+    public decimal CumulativeDrop(FeederNode feeder, IReadOnlyDictionary<FeederNode, FeederResult> feeders)
+    {
+        decimal Own(FeederNode f) => feeders.GetValueOrDefault(f)?.Drop?.Value?.Percent ?? 0;
+        if (_cumulative.TryGetValue(feeder, out var known)) return known;
+
+        // Walk up to a feeder already known, the source, or back into this walk (a cycle).
+        var walk = new List<FeederNode>();
+        var position = new Dictionary<FeederNode, int>();
+        decimal above = 0;
+        var cycleStart = -1;
+        for (FeederNode? f = feeder; f is not null; f = Supplier(f, model))
+        {
+            Steps++;
+            if (_cumulative.TryGetValue(f, out known))
+            {
+                above = known;
+                break;
+            }
+
+            if (position.TryGetValue(f, out var back))
+            {
+                cycleStart = back;
+                break;
+            }
+
+            position[f] = walk.Count;
+            walk.Add(f);
+        }
+
+        var end = walk.Count;
+        if (cycleStart >= 0)
+        {
+            // Every member of a cycle gets the cycle's whole drop, as a walk from it that stops where it came back would.
+            decimal round = 0;
+            for (var i = cycleStart; i < end; i++) round += Own(walk[i]);
+            for (var i = cycleStart; i < end; i++) _cumulative[walk[i]] = round;
+            above = round;
+            end = cycleStart;
+        }
+
+        for (var i = end - 1; i >= 0; i--) _cumulative[walk[i]] = above += Own(walk[i]);
+        return _cumulative[feeder];
     }
 
     /// <summary>The feeder this one is supplied from ('from'), if any.</summary>
@@ -255,18 +318,37 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
                 new Fix($"Change the grounding conductor to {min}", [EditBuilder.Replace(feeder.Statement("ground")!.Arg("size")!, min.ToString())]));
     }
 
-    /// <summary>The feeder and every feeder supplied from it, directly or further down.</summary>
+    /// <summary>The feeder and every feeder supplied from it, directly or further down (breadth first, in list order).</summary>
     private IEnumerable<FeederNode> Downstream(FeederNode feeder)
     {
+        _suppliedFrom ??= SuppliedFrom();
         var seen = new HashSet<FeederNode>();
         var queue = new Queue<FeederNode>([feeder]);
         while (queue.Count > 0)
         {
             var f = queue.Dequeue();
+            Steps++;
             if (!seen.Add(f)) continue;
             yield return f;
-            foreach (var child in model.Feeders.Where(c => c.From is { } from && model.Find(from.Value) == f)) queue.Enqueue(child);
+            if (_suppliedFrom.TryGetValue(f, out var children))
+            {
+                foreach (var child in children) queue.Enqueue(child);
+            }
         }
+    }
+
+    /// <summary>Each feeder's directly supplied feeders, in list order, found once for the pass instead of by a scan of every feeder per step.</summary>
+    private Dictionary<FeederNode, List<FeederNode>> SuppliedFrom()
+    {
+        var map = new Dictionary<FeederNode, List<FeederNode>>();
+        foreach (var f in model.Feeders)
+        {
+            if (Supplier(f, model) is not { } up) continue;
+            if (!map.TryGetValue(up, out var list)) map[up] = list = [];
+            list.Add(f);
+        }
+
+        return map;
     }
 
     private static FeederLoad? LoadOf(LoadNode load, decimal volts, Phases phases)

@@ -21,6 +21,9 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
 
     private readonly Dictionary<FeederNode, Settings> _feederSettings = [];
 
+    // 'like' lookups remembered for this pass: linear in the length of a chain.
+    private readonly LikeResolver _likes = new(model);
+
     private Settings FeederSettings(FeederNode feeder)
     {
         if (!_feederSettings.TryGetValue(feeder, out var s)) _feederSettings[feeder] = s = Settings.For(feeder, model);
@@ -33,7 +36,7 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         var feeder = motor.Feeder;
         if (motor.Power is not { } power || feeder.Voltage is not { } systemVolts || feeder.Phases is not { } systemPhases) return r;
 
-        var settings = motor.Like is null && !Settings.HasOwn(motor) ? FeederSettings(feeder) : Settings.For(motor, model);
+        var settings = motor.Like is null && !Settings.HasOwn(motor) ? FeederSettings(feeder) : Settings.For(motor, model, _likes);
         r.Settings = settings;
         var ratedVolts = motor.RatedVoltage?.Value.Value ?? systemVolts.Value.Value;
         var phases = motor.Phases?.Value ?? systemPhases.Value;
@@ -233,7 +236,7 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
 
         r.Device = device?.Value ?? ProtectiveDevice.InverseTimeBreaker;
         r.ProtectionRating = rating?.Value.Value;
-        var hardStart = Likes.Has(motor, model, m => m.HardStart);
+        var hardStart = _likes.Has(motor, static m => m.HardStart);
         r.ProtectionBasis = new ProtectionInput(flc, r.Device, phases, kind, design, efficiency, hardStart);
         r.MaximumProtection = cache.MaximumProtection(r.ProtectionBasis.Value);
         if (r.MaximumProtection.Value is not { } max)
@@ -464,11 +467,11 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         r.LockedRotorTableMaximum = cache.LockedRotorMaximum(r.Horsepower, r.Volts, phases, design ?? DesignLetter.B);
     }
 
-    private Located<T>? Get<T>(MotorNode motor, Func<MotorNode, Located<T>?> get) => Likes.Get(motor, model, get)?.Value;
+    private Located<T>? Get<T>(MotorNode motor, Func<MotorNode, Located<T>?> get) => _likes.Get(motor, get)?.Value;
 
     private Located<T>? Get<T>(MotorNode motor, Func<MotorNode, Located<T>?> get, out MotorNode? owner)
     {
-        var found = Likes.Get(motor, model, get);
+        var found = _likes.Get(motor, get);
         owner = found?.Owner;
         return found?.Value;
     }

@@ -26,4 +26,5 @@ public static class SyntaxCodes
     public const string FileTooLarge = "P018";
     public const string BinaryContent = "P019";
     public const string DuplicateProject = "P020";
+    public const string MoreOnLine = "P027";
 }

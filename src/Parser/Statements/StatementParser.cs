@@ -19,6 +19,17 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
     private readonly Dictionary<(string Digits, Unit Unit), object> _quantities = [];
     private Argument?[]?[] _filled = new Argument?[]?[8];
 
+    /// <summary>
+    /// Problems reported one by one on a line; the rest are counted into one P027 diagnostic, so a
+    /// line of a million stray values costs one diagnostic per line, not one per value.
+    /// </summary>
+    internal const int MaxProblemsPerLine = 10;
+
+    private int _lineStart;
+    private int _notShown;
+    private SourceRange _notShownFrom;
+    private SourceRange _notShownTo;
+
     /// <summary>A value made of one token or of a number and its unit written apart ("15 hp", "10 AWG").</summary>
     private readonly record struct Item(SyntaxToken First, SyntaxToken Last, LexicalValue Value)
     {
@@ -31,6 +42,8 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
     public Statement Parse(SyntaxLine line, KeywordSpec spec, out bool ok)
     {
         var before = diagnostics.Count;
+        _lineStart = before;
+        _notShown = 0;
         var items = Group(line.Tokens);
         // Scratch arrays reused across statements (one per number of positions): a list has tens of thousands of statements.
         var n = spec.Args.Length;
@@ -86,6 +99,10 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         {
             Error(SyntaxCodes.UnexpectedValue, line.Tokens[0].Range, "give a load's current or its kVA, not both");
         }
+
+        if (_notShown > 0)
+            diagnostics.Add(new Diagnostic(SyntaxCodes.MoreOnLine, Severity.Error, SourceRange.Cover(_notShownFrom, _notShownTo),
+                $"{_notShown} more problem{(_notShown == 1 ? "" : "s")} on this line not shown (at most {MaxProblemsPerLine} are listed per line)"));
 
         ok = diagnostics.Count == before;
         var count = 0;
@@ -410,6 +427,15 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         _ => a.Name,
     };
 
-    private void Error(string code, SourceRange range, string message) =>
-        diagnostics.Add(new Diagnostic(code, Severity.Error, range, message));
+    private void Error(string code, SourceRange range, string message)
+    {
+        if (diagnostics.Count - _lineStart < MaxProblemsPerLine)
+        {
+            diagnostics.Add(new Diagnostic(code, Severity.Error, range, message));
+            return;
+        }
+
+        if (_notShown++ == 0) _notShownFrom = range;
+        _notShownTo = range;
+    }
 }

@@ -1,4 +1,5 @@
 using System.Collections.Concurrent;
+using MotorLang.Analysis.Findings;
 using MotorLang.Server.Documents;
 using MotorLang.Server.Protocol;
 
@@ -56,7 +57,7 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
             if (debounce > TimeSpan.Zero) await Task.Delay(debounce, ct);
             var analysis = await Task.Run(() => snapshot.Analysis, ct);
             if (ct.IsCancellationRequested) return;
-            var diagnostics = analysis.Findings.Select(f => Convert.ToLsp(f, snapshot.Uri)).ToArray();
+            var diagnostics = FindingCap.Shown(analysis.Findings).Select(f => Convert.ToLsp(f, snapshot.Uri)).ToArray();
             // One publication at a time, and never an earlier change after a later one: an analysis
             // that lost the race to its cancellation must not overwrite fresher diagnostics.
             await _publishing.WaitAsync(CancellationToken.None);
