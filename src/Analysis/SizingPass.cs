@@ -21,6 +21,9 @@ internal sealed class SizingPass(ParseResult parse, SizingCache? cache = null)
 
     public SizingCache Cache => _cache;
 
+    /// <summary>Feeders visited by the drop-from-source and cycle walks of this pass; tests check it grows linearly.</summary>
+    internal long FeederSteps { get; private set; }
+
     private MotorSizer MotorSizer => _motorSizer ??= new MotorSizer(parse.Model, _edits, _scratch, _cache);
 
     private Func<MotorNode, MotorResult>? _sizeMotor;
@@ -116,6 +119,8 @@ internal sealed class SizingPass(ParseResult parse, SizingCache? cache = null)
         {
             if (feeders[feeder] is var r && fresh.Contains(r)) r.DropFindings = TotalDrops(model, feeder, r, motors, sharedMotor);
         }
+
+        FeederSteps += sizer.Steps;
 
         return feeders;
     }

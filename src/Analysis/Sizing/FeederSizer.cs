@@ -161,7 +161,7 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
         return _onCycle.Contains(feeder);
     }
 
-    /// <summary>Feeders visited while working out drops from the source and what feeders supply; tests use it to check the work grows linearly.</summary>
+    /// <summary>Feeders visited while working out drops from the source and cycles of 'from'; tests use it to check the work grows linearly.</summary>
     internal long Steps { get; private set; }
 
     /// <summary>
@@ -327,7 +327,6 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
         while (queue.Count > 0)
         {
             var f = queue.Dequeue();
-            Steps++;
             if (!seen.Add(f)) continue;
             yield return f;
             if (_suppliedFrom.TryGetValue(f, out var children))
