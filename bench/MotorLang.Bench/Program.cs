@@ -27,6 +27,9 @@ switch (args)
     case ["process", var n, var motorlang]:
         await MemoryReports.Process(int.Parse(n), motorlang);
         break;
+    case ["hostile", var motorlang, ..]:
+        HostileLists.Run(motorlang, args.Length > 2 ? int.Parse(args[2]) : 1);
+        break;
     default:
         BenchmarkSwitcher.FromAssembly(typeof(ParseAndFormatBenchmarks).Assembly).Run(args);
         break;

@@ -45,6 +45,31 @@ public sealed class CliTests : IDisposable
     }
 
     [Fact]
+    public void CheckShowsAtMostAThousandFindingsPerFileThenOneNote()
+    {
+        // 400 motors with only a horsepower: each gets M203/M204 and M301s, well over 1,000 findings.
+        var text = "feeder F 480V 3ph\n" + string.Concat(Enumerable.Range(1, 400).Select(i => $"  motor M-{i} 5hp\n"));
+        var path = Write("many.motors", text);
+        var total = MotorLang.Analysis.Analyzer.Analyze(text).Findings.Length;
+        Assert.True(total > 1001);
+
+        var (code, output, err) = Run("check", path);
+        var lines = output.Trim().Split('\n');
+        Assert.Equal(1001, lines.Length);
+        Assert.Contains($": information M310: {total - 1000} more findings not shown", lines[^1]);
+        Assert.Equal(0, code);
+        Assert.Contains("1 file checked: 0 errors, 400 warnings", err); // every motor's M204 counted, shown or not
+
+        foreach (var format in new[] { "json", "sarif" })
+        {
+            var (_, report, _) = Run("check", "--format", format, path);
+            var key = format == "json" ? "code" : "ruleId";
+            Assert.Single(System.Text.RegularExpressions.Regex.Matches(report, $"\"{key}\":\\s*\"M310\""));
+            Assert.Equal(1001, System.Text.RegularExpressions.Regex.Matches(report, $"\"{key}\":").Count);
+        }
+    }
+
+    [Fact]
     public void MissingFilesAndEmptyFoldersAreUsageErrors()
     {
         var (code, _, err) = Run("check", Path.Combine(_dir, "nope.motors"));
