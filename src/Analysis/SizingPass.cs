@@ -117,7 +117,7 @@ internal sealed class SizingPass(ParseResult parse, SizingCache? cache = null)
 
         foreach (var feeder in model.Feeders)
         {
-            if (feeders[feeder] is var r && fresh.Contains(r)) r.DropFindings = TotalDrops(model, feeder, r, motors, sharedMotor);
+            if (feeders[feeder] is var r && fresh.Contains(r)) r.DropFindings = TotalDrops(model, feeder, r, motors, sharedMotor, feeders);
         }
 
         FeederSteps += sizer.Steps;
@@ -125,14 +125,34 @@ internal sealed class SizingPass(ParseResult parse, SizingCache? cache = null)
         return feeders;
     }
 
+    /// <summary>The feeder and those it is supplied from, nearest first.</summary>
+    private static List<FeederResult> SupplyChain(MotorList model, FeederNode feeder, Dictionary<FeederNode, FeederResult> feeders)
+    {
+        var chain = new List<FeederResult>();
+        var seen = new HashSet<FeederNode>();
+        for (FeederNode? f = feeder; f is not null && seen.Add(f); f = Sizing.FeederSizer.Supplier(f, model))
+        {
+            if (feeders.GetValueOrDefault(f) is { } r) chain.Add(r);
+        }
+
+        return chain;
+    }
+
     /// <summary>Each motor's drop from the source (its feeder's plus its branch) against the total limit.</summary>
     private static Finding[] TotalDrops(MotorList model, FeederNode feeder, FeederResult fr, LayeredMap<MotorNode, MotorResult>.Builder motors,
-        Func<MotorResult, bool>? sharedMotor)
+        Func<MotorResult, bool>? sharedMotor, Dictionary<FeederNode, FeederResult> feeders)
     {
         List<Finding>? findings = null;
         var upstream = fr.CumulativeDropPercent ?? 0;
         foreach (var motor in feeder.Motors)
         {
+            if (motors.GetValueOrDefault(motor) is { FirePumpBranch: not null } pump)
+            {
+                var voltage = FirePumpVoltageCheck.Check(pump, SupplyChain(model, feeder, feeders), ref findings);
+                if (sharedMotor?.Invoke(pump) == true) motors[motor] = pump.Rebind(motor);
+                motors[motor]!.FirePumpVoltage = voltage;
+            }
+
             if (motors.GetValueOrDefault(motor) is not { } r || r.BranchDrop?.Value is not { } branch) continue;
             var total = upstream + branch.Percent;
             if (r.TotalDropPercent != total)

@@ -93,6 +93,33 @@ public class StatementTests
     }
 
     [Fact]
+    public void FirePumpDriveAndPartWindingWordsAreRead()
+    {
+        var m = Motor("fire-service pump", "locked-rotor 790A", "protection inverse-time-breaker 800A fire-pump-listed", "drive-overload");
+        Assert.Equal(FireServiceRole.FirePump, m.FireService!.Value);
+        Assert.Equal("3:18-3:22", $"{m.FireService.Range.Start}-{m.FireService.Range.End}");
+        Assert.Equal(790m, m.LockedRotorCurrent!.Value.Value);
+        Assert.True(m.ProtectionListed!.Value);
+        Assert.Equal("5:42-5:58", $"{m.ProtectionListed.Range.Start}-{m.ProtectionListed.Range.End}");
+        Assert.True(m.DriveOverload!.Value);
+        var pw = Motor("starting part-winding", "protection dual-element-fuse both-windings 175A", "overload 60A per-winding");
+        Assert.Equal(WindingScope.BothWindings, pw.ProtectionWindings!.Value);
+        Assert.Equal(175m, pw.ProtectionRating!.Value.Value);
+        Assert.Equal(WindingScope.PerWinding, pw.OverloadWindings!.Value);
+        Assert.Equal(FireServiceRole.PressureMaintenance, Motor("fire-service jockey").FireService!.Value);
+        var load = DocumentParser.Parse(Lines(Feeder, "  load L-1 2A", "    fire-service accessory")).Model.Feeders.Single().Loads.Single();
+        Assert.Equal(FireServiceRole.Accessory, load.FireService!.Value);
+    }
+
+    [Theory]
+    [InlineData("    fire-service sprinkler", "3:18-3:27 P010")]
+    [InlineData("    fire-service", "3:5-3:17 P002")]
+    [InlineData("    drive-overload 20A", "3:20-3:23 P003")]
+    [InlineData("    protection inverse-time-breaker 800A listed", "3:42-3:48 P010")]
+    public void FirePumpWordsReportBadValuesOnTheirOwnSpan(string line, string expected) =>
+        Assert.Equal([expected], Codes(Lines(Feeder, "  motor P-1 15hp", line)));
+
+    [Fact]
     public void LoadsTakeCurrentOrKvaAndContinuity()
     {
         var f = DocumentParser.Parse(Lines(Feeder, "  load L-1 \"Lights\" 12A continuous", "  load L-2 6kVA")).Model.Feeders.Single();

@@ -4,6 +4,7 @@ using MotorLang.Parser.Model;
 using MotorLang.Parser.Text;
 using MotorLang.Sizing;
 using MotorLang.Sizing.Rules;
+using MotorLang.Sizing.Domain;
 
 namespace MotorLang.Analysis.Editing;
 
@@ -57,9 +58,11 @@ public static class Breakdown
     {
         "wire" or "conductor" or "ambient" or "ccc" => heading is "Full-load current" or "Branch conductors" || heading.StartsWith("Written wire", StringComparison.Ordinal),
         "protection" or "hard-start" => heading is "Full-load current" or "Short-circuit and ground-fault protection",
+        "locked-rotor" => heading is "Short-circuit and ground-fault protection" or "Locked-rotor current" or FirePumpVoltageHeading,
+        "drive-overload" => heading == "Overload",
         "overload" or "nameplate" or "service-factor" or "temp-rise" => heading is "Full-load current" or "Overload",
         "ground" => heading == "Grounding conductor",
-        "length" or "drop-limit" or "power-factor" => heading == "Voltage drop",
+        "length" or "drop-limit" or "power-factor" => heading is "Voltage drop" or FirePumpVoltageHeading,
         "disconnect" => heading == "Disconnecting means",
         "controller" => heading == "Controller",
         "conduit" or "raceway" => heading == "Conduit",
@@ -79,9 +82,16 @@ public static class Breakdown
                     : $"✗ {w} carries only {Format.Amps(allowable)}; {Format.Amps(needed)} is required");
         }
 
-        if (m.MaximumProtection is { } max)
+        if (m.FirePumpMinimumProtection is { } fireMin)
+            yield return new BreakdownSection("Short-circuit and ground-fault protection", fireMin.Steps,
+                fireMin.Unavailable ?? (m.FirePumpListedDevice ? "✓ listed for fire pump service; its curve was not checked" : Compare(m.ProtectionRating, fireMin.Value, "rating", atMost: false)));
+        else if (m.MaximumProtection is { } max)
             yield return new BreakdownSection("Short-circuit and ground-fault protection", max.Steps,
                 Compare(m.ProtectionRating, max.Value, "rating", atMost: true));
+        if (m.FireService == FireServiceRole.FirePump)
+            yield return new BreakdownSection("Overload",
+                [new Step("Overload protection", "none", "NEC 695.6(D)", "a fire pump's power circuit has no automatic overload protection")],
+                m.Overload is { } written ? $"✗ an overload of {Format.Amps(written)} is written" : "✓ none written");
         if (m.OverloadLimit is { } ol)
             yield return new BreakdownSection("Overload", ol.Steps.Concat(m.OverloadAbsoluteLimit?.Steps.Skip(1) ?? []).ToList(),
                 ol.Unavailable ?? Compare(m.Overload, ol.Value, "setting", atMost: true));
@@ -93,10 +103,15 @@ public static class Breakdown
         if (m.BranchDrop is { } vd)
             yield return new BreakdownSection("Voltage drop", vd.Steps.Concat(m.StartingDrop?.Steps ?? []).ToList(),
                 m.TotalDropPercent is { } total ? $"feeders and branch together: {total:0.##} %" : null);
+        if (m.FirePumpVoltage is { } fpv)
+            yield return new BreakdownSection(FirePumpVoltageHeading, fpv.Steps, fpv.Unavailable ?? (fpv.Value is { } v
+                ? $"{Within("starting", v.StartingPercent, v.StartingLimitPercent)} · {Within("running", v.RunningPercent, v.RunningLimitPercent)}"
+                : null));
         if (m.MinimumConduit is { } conduit)
             yield return new BreakdownSection("Conduit", conduit.Steps,
                 m.ConduitFillPercent is { } fill ? $"{(fill <= 40 ? "✓" : "✗")} the written conduit is {fill:0.#} % full" : conduit.Unavailable);
-        var lr = (m.LockedRotorFromCodeLetter?.Steps ?? []).Concat(m.LockedRotorTableMaximum?.Steps ?? []).ToList();
+        var lr = (m.LockedRotorFromCodeLetter?.Steps ?? []).Concat(m.LockedRotorTableMaximum?.Steps ?? [])
+            .Concat(m.FireService == FireServiceRole.PressureMaintenance ? m.FirePumpLockedRotor?.Steps ?? [] : []).ToList();
         if (lr.Count > 0) yield return new BreakdownSection("Locked-rotor current", lr);
     }
 
@@ -110,6 +125,9 @@ public static class Breakdown
             yield return new BreakdownSection("Feeder conductors", req.Steps.Concat(f.MinimumWire?.Steps ?? []).ToList(), verdict);
         }
 
+        if (f.FirePumpMinimumProtection is { } fireMin)
+            yield return new BreakdownSection("Feeder protection", fireMin.Steps,
+                fireMin.Unavailable ?? (f.Feeder.ProtectionListed is not null ? "✓ listed for fire pump service; its curve was not checked" : Compare(f.ProtectionRating, fireMin.Value, "rating", atMost: false)));
         if (f.MaximumProtection is { } max)
             yield return new BreakdownSection("Feeder protection", max.Steps, Compare(f.ProtectionRating, max.Value, "rating", atMost: true) ?? max.Unavailable);
         if (f.MinimumGround is { } g) yield return new BreakdownSection("Grounding conductor", g.Steps);
@@ -117,9 +135,15 @@ public static class Breakdown
             yield return new BreakdownSection("Voltage drop", vd.Steps, f.CumulativeDropPercent is { } c ? $"from the source: {c:0.##} %" : null);
     }
 
+    private const string FirePumpVoltageHeading = "Fire pump voltage (NEC 695.7)";
+
+    private static string Within(string what, decimal percent, decimal limit) =>
+        percent <= limit ? $"✓ {what} {percent:0.##} % within {limit:0.##} %" : $"✗ {what} {percent:0.##} % above {limit:0.##} %";
+
     private static string? Compare(decimal? written, decimal? limit, string what, bool atMost)
     {
         if (written is not { } w || limit is not { } l) return null;
+        if (!atMost) return w >= l ? $"✓ the written {what} {Format.Amps(w)} is at least {Format.Amps(l)}" : $"✗ the written {what} {Format.Amps(w)} is below the minimum {Format.Amps(l)}";
         return atMost && w <= l ? $"✓ the written {what} {Format.Amps(w)} is within {Format.Amps(l)}" : $"✗ the written {what} {Format.Amps(w)} exceeds {Format.Amps(l)}";
     }
 
@@ -130,6 +154,7 @@ public static class Breakdown
         if (flc && m.FullLoadCurrent.Value is { } amps) parts.Add($"FLC {Format.Amps(amps)}");
         if (wire && m.MinimumWire?.Value is { } w) parts.Add($"min {w}");
         if (m.MaximumProtection?.Value is { } p && flc) parts.Add($"max {Format.Amps(p)}");
+        if (m.FirePumpMinimumProtection?.Value is { } fp && flc) parts.Add($"min {Format.Amps(fp)} (fire pump)");
         return parts.Count == 0 ? null : string.Join(" · ", parts);
     }
 
@@ -140,5 +165,6 @@ public static class Breakdown
             $"load {Format.Amps(f.CalculatedLoad)}",
             f.MinimumWire?.Value is { } w ? $"min wire {w}" : null,
             f.MaximumProtection?.Value is { } p ? $"max protection {Format.Amps(p)}" : null,
+            f.FirePumpMinimumProtection?.Value is { } fp ? $"min protection {Format.Amps(fp)} (fire pump)" : null,
         }.OfType<string>());
 }

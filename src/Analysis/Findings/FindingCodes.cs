@@ -17,6 +17,12 @@ public static class FindingCodes
     public const string ConduitOverfilled = "M109";
     public const string VoltageMismatch = "M110";
     public const string NeedsNameplate = "M111";
+    public const string FirePumpProtectionTooSmall = "M112";
+    public const string FirePumpOverload = "M113";
+    public const string FirePumpConductorsUndersized = "M114";
+    public const string FirePumpStartingDrop = "M115";
+    public const string FirePumpRunningDrop = "M116";
+    public const string PartWindingProtectionTooLarge = "M117";
     public const string SmallConductorNotPermitted = "M120";
 
     public const string ProtectionMayTrip = "M201";
@@ -24,6 +30,7 @@ public static class FindingCodes
     public const string OverloadMissing = "M203";
     public const string CannotCheck = "M204";
     public const string OverloadAboveRunningLimit = "M205";
+    public const string FirePumpDropPartlyChecked = "M206";
     public const string FeederDeviceNotSized = "M215";
     public const string SuppliesAnotherVoltage = "M216";
 
@@ -36,5 +43,6 @@ public static class FindingCodes
     public const string SmallConductorConditions = "M211";
 
     public const string NotWritten = "M301";
+    public const string FirePumpListedDevice = "M302";
     public const string NotShown = "M310";
 }

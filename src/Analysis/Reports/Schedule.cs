@@ -84,7 +84,7 @@ public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<Fee
 
     private static FeederTotals Totals(FeederResult f) => new(
         f.Tag, f.Volts > 0 ? $"{Format.Number(f.Volts)} V" : "", Format.Amps(f.CalculatedLoad), Amps(f.RequiredAmpacity),
-        Text(f.MinimumWire), f.Wire?.ToString() ?? "", Amps(f.MaximumProtection),
+        Text(f.MinimumWire), f.Wire?.ToString() ?? "", f.FirePumpMinimumProtection?.Value is { } fpMin ? $"≥ {Format.Amps(fpMin)}" : Amps(f.MaximumProtection),
         f.ProtectionRating is { } p ? Format.Amps(p) : "", f.MinimumGround?.Value?.ToString() ?? "", f.Ground?.ToString() ?? "",
         f.Drop?.Value is { } d ? $"{d.Percent:0.##} %" : "")
     {
@@ -93,6 +93,7 @@ public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<Fee
     };
 
     private static string Protection(MotorResult m) =>
+        m.FirePumpMinimumProtection?.Value is { } min ? $"≥ {Format.Amps(min)} {Short(m.Device)}" :
         m.MaximumProtection?.Value is { } max ? $"{Format.Amps(m.Device == ProtectiveDevice.InstantaneousTripBreaker ? decimal.Floor(max) : max)} {Short(m.Device)}" : "";
 
     private static string Short(ProtectiveDevice d) => d switch

@@ -16,7 +16,7 @@ namespace MotorLang.Analysis.Sizing;
 /// Sizes feeders (430.24, 430.62(A)) from the motors and loads they supply, including those on
 /// feeders supplied from them ('from'), so a switchboard feeder carries its motor control centers.
 /// </summary>
-internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorResult>.Builder motors, EditBuilder edits, List<Finding> findings, SizingCache cache)
+internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorResult>.Builder motors, EditBuilder edits, List<Finding> findings, SizingCache cache)
 {
     private static readonly decimal Sqrt3 = 1.7320508075688772935274463415m;
 
@@ -78,15 +78,28 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
         var loads = supplied.SelectMany(f => f.Loads).Select(l => LoadOf(l, r.Volts, r.Phases)).OfType<FeederLoad>().ToList();
         r.CalculatedLoad = feederMotors.Sum(m => m.FullLoadAmps * m.Quantity) + loads.Sum(l => l.Amps);
         r.RequiredAmpacity = Feeders.RequiredAmpacity(feederMotors, loads);
-        r.MaximumProtection = device == ProtectiveDevice.InstantaneousTripBreaker
-            ? Result<decimal>.Missing("an instantaneous-trip breaker is not a feeder protective device MotorLang can size (430.52(C)(3) permits one only in a listed combination motor controller on a motor branch circuit)")
-            : Feeders.MaximumProtection(feederMotors, loads, fuse: device is ProtectiveDevice.DualElementFuse or ProtectiveDevice.NonTimeDelayFuse);
+        var fuse = device is ProtectiveDevice.DualElementFuse or ProtectiveDevice.NonTimeDelayFuse;
+        var parts = FirePumpParts(supplied, motorResults, r.Volts, r.Phases);
+        r.SuppliesFirePump = parts.Any(p => p.Role == FireServiceRole.FirePump);
+        var governedBy695 = r.SuppliesFirePump && FirePumpAmpacity(r, parts);
+        if (r.SuppliesFirePump)
+            r.FirePumpMinimumProtection = FirePump.MinimumDevice(parts, fuse);
+        else
+            r.MaximumProtection = device == ProtectiveDevice.InstantaneousTripBreaker
+                ? Result<decimal>.Missing("an instantaneous-trip breaker is not a feeder protective device MotorLang can size (430.52(C)(3) permits one only in a listed combination motor controller on a motor branch circuit)")
+                : Feeders.MaximumProtection(feederMotors, loads, fuse);
         r.ProtectionRating = feeder.ProtectionRating?.Value.Value;
         var required = r.RequiredAmpacity.Value!.Value;
         if (required > 0) r.MinimumWire = cache.MinimumWire(required, settings.Conditions, false);
 
-        CheckWire(feeder, r, required, settings);
-        CheckProtection(feeder, r);
+        CheckWire(feeder, r, required, settings, governedBy695);
+        // 430.62(B): conductors larger than 430.24 requires may carry a device up to their ampacity.
+        if (r.MaximumProtection is { } partA)
+            r.MaximumProtection = FeederConductorProtection.Maximum(partA, r.WireAmpacity?.Value, required, fuse);
+        if (r.SuppliesFirePump)
+            CheckFirePumpProtection(feeder, r);
+        else
+            CheckProtection(feeder, r);
         CheckGround(feeder, r, settings);
         CheckConduit(feeder, r, settings);
         Drop(r, settings);
@@ -139,6 +152,7 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
     {
         var wire = r.Wire ?? r.MinimumWire?.Value;
         if (r.Feeder.Length is not { } length || wire is null || r.CalculatedLoad == 0) return;
+        r.DropBasis = new DropBasis(Conversions.Feet(length.Value), wire.Value, r.Volts, r.Phases, settings.Material, settings.Raceway, settings.PowerFactor);
         r.Drop = VoltageDrop.Of(r.CalculatedLoad, Conversions.Feet(length.Value), wire.Value, r.Volts, r.Phases, settings.Material, settings.Raceway, settings.PowerFactor);
         if (r.Drop.Unavailable is { } why)
             Add(FindingCodes.CannotCheck, Severity.Warning, length.Range, $"the feeder voltage drop cannot be worked out: {why}");
@@ -217,7 +231,7 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
     /// <summary>The feeder this one is supplied from ('from'), if any.</summary>
     public static FeederNode? Supplier(FeederNode feeder, MotorList model) => feeder.From is { } from ? model.Find(from.Value) as FeederNode : null;
 
-    private void CheckWire(FeederNode feeder, FeederResult r, decimal required, Settings settings)
+    private void CheckWire(FeederNode feeder, FeederResult r, decimal required, Settings settings, bool governedBy695)
     {
         if (feeder.Wire is not { } wire)
         {
@@ -237,18 +251,20 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
         {
             if (required > 0)
                 Add(FindingCodes.CannotCheck, Severity.Warning, wire.Range,
-                    $"feeder wire {wire.Value} cannot be checked against the {Format.Amps(required)} NEC 430.24 requires: {r.WireAmpacity.Unavailable}");
+                    $"feeder wire {wire.Value} cannot be checked against the {Format.Amps(required)} NEC {(governedBy695 ? "695.6(C)" : "430.24")} requires: {r.WireAmpacity.Unavailable}");
             return;
         }
 
         if (allowable >= required) return;
+        var code = governedBy695 ? FindingCodes.FirePumpConductorsUndersized : FindingCodes.FeederWireUndersized;
+        var rule = governedBy695 ? "695.6(C)" : "430.24";
         if (r.MinimumWire?.Value is { } minimum)
-            Add(FindingCodes.FeederWireUndersized, Severity.Error, wire.Range,
-                $"feeder wire {wire.Value} carries {Format.Amps(allowable)} here; NEC 430.24 requires {Format.Amps(required)}: use {minimum}",
+            Add(code, Severity.Error, wire.Range,
+                $"feeder wire {wire.Value} carries {Format.Amps(allowable)} here; NEC {rule} requires {Format.Amps(required)}: use {minimum}",
                 new Fix($"Change the feeder wire to {minimum}", [EditBuilder.Replace(feeder.Statement("wire")!.Arg("size")!, minimum.ToString())]));
         else
-            Add(FindingCodes.FeederWireUndersized, Severity.Error, wire.Range,
-                $"feeder wire {wire.Value} carries {Format.Amps(allowable)} here; NEC 430.24 requires {Format.Amps(required)}, and {r.MinimumWire?.Unavailable}");
+            Add(code, Severity.Error, wire.Range,
+                $"feeder wire {wire.Value} carries {Format.Amps(allowable)} here; NEC {rule} requires {Format.Amps(required)}, and {r.MinimumWire?.Unavailable}");
     }
 
     private void CheckProtection(FeederNode feeder, FeederResult r)
@@ -289,7 +305,7 @@ internal sealed class FeederSizer(MotorList model, LayeredMap<MotorNode, MotorRe
 
     private void CheckGround(FeederNode feeder, FeederResult r, Settings settings)
     {
-        if ((r.ProtectionRating ?? r.MaximumProtection?.Value) is not { } device) return;
+        if ((r.ProtectionRating ?? r.MaximumProtection?.Value ?? r.FirePumpMinimumProtection?.Value) is not { } device) return;
         // 250.122(B) measures upsizing from the smallest conductor that suits the installation; a feeder's
         // conductors are normally chosen to carry its protective device's rating, so that is the base
         // (common practice, no source). Anything larger counts as upsized.

@@ -75,9 +75,33 @@ public sealed class MotorResult(MotorNode motor)
     /// <summary>The installation settings the motor was sized with.</summary>
     internal Resolution.Settings? Settings { get; set; }
 
+    /// <summary>What the motor is to a fire pump installation (Article 695), if anything.</summary>
+    public FireServiceRole? FireService { get; internal set; }
+
+    /// <summary>A fire pump's or pressure maintenance pump's locked-rotor current (695.4(B)(2)(a)(1)), the largest known.</summary>
+    public Result<decimal>? FirePumpLockedRotor { get; internal set; }
+
+    /// <summary>A fire pump's smallest permitted branch device (695.4(B)(2)(a)(1)); it replaces the 430.52 maximum.</summary>
+    public Result<decimal>? FirePumpMinimumProtection { get; internal set; }
+
+    /// <summary>The fire pump's protective device is stated to be listed for fire pump service.</summary>
+    public bool FirePumpListedDevice { get; internal set; }
+
+    /// <summary>A fire pump's branch drops for 695.7: starting at locked-rotor current, running at 115 % of full-load current.</summary>
+    internal FirePumpBranch? FirePumpBranch { get; set; }
+
+    /// <summary>A fire pump's voltage at starting and running (695.7), from the source through its feeders and branch.</summary>
+    public Result<FirePumpVoltage>? FirePumpVoltage { get; internal set; }
+
     /// <summary>The current this motor adds to its feeder under 430.24 (its duty-cycle current when it has one).</summary>
     public decimal? DutyCycleAmps { get; internal set; }
 }
+
+/// <summary>A fire pump branch's part of the 695.7 drops, and the currents the feeders carry for them.</summary>
+internal sealed record FirePumpBranch(Drop? Starting, Drop? Running, decimal LockedRotorAmps, decimal ExtraRunningAmps, string? Missing);
+
+/// <summary>The 695.7 voltage drops of a fire pump, as percentages of the system voltage, with their limits.</summary>
+public readonly record struct FirePumpVoltage(decimal StartingPercent, decimal StartingLimitPercent, decimal RunningPercent, decimal RunningLimitPercent);
 
 internal readonly record struct StartingDropInput(decimal LockedRotorAmps, decimal Feet, WireSpec Wire, decimal Volts, Phases Phases,
     ConductorMaterial Material, RacewayType Raceway);
@@ -111,6 +135,22 @@ public sealed class FeederResult(FeederNode feeder)
     public Result<Drop>? Drop { get; internal set; }
     public Result<TradeSize>? MinimumConduit { get; internal set; }
     public decimal? ConduitFillPercent { get; internal set; }
+    /// <summary>The feeder supplies a fire pump (directly or through feeders 'from' it): 695.4 and 695.6 replace 430.62 and add to 430.24.</summary>
+    public bool SuppliesFirePump { get; internal set; }
+
+    /// <summary>The smallest protective device a fire pump supply permits (695.4(B)(2)(a)(1)).</summary>
+    public Result<decimal>? FirePumpMinimumProtection { get; internal set; }
+
+    /// <summary>What the feeder's drop is worked out from, for the fire pump checks that add other currents to it.</summary>
+    internal DropBasis? DropBasis { get; set; }
+
     /// <summary>Drop from the source to this feeder's load end, through the feeders it is supplied from.</summary>
     public decimal? CumulativeDropPercent { get; internal set; }
+}
+
+/// <summary>A circuit's conductors and settings, to work out its drop at another current or power factor.</summary>
+internal sealed record DropBasis(decimal Feet, WireSpec Wire, decimal Volts, Phases Phases, ConductorMaterial Material, RacewayType Raceway, decimal PowerFactor)
+{
+    public decimal? Percent(decimal amps, decimal powerFactor) =>
+        VoltageDrop.Of(amps, Feet, Wire, Volts, Phases, Material, Raceway, powerFactor).Value?.Percent;
 }

@@ -14,7 +14,7 @@ using MotorLang.Sizing.Tables;
 namespace MotorLang.Analysis.Sizing;
 
 /// <summary>Sizes one motor circuit with the sizing core and reports what the motor list gets wrong or leaves out.</summary>
-internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Finding> findings, SizingCache cache)
+internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, List<Finding> findings, SizingCache cache)
 {
     /// <summary>Findings about values a motor inherits through 'like', with the motor they are written on.</summary>
     public List<(Finding Finding, MotorNode Owner)> Inherited { get; } = [];
@@ -92,17 +92,31 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         }
 
         var protectionFlc = ProtectionCurrent(rating, flc);
-        CheckProtection(motor, r, protectionFlc, phases, kind, design, efficiency);
-        if (protectionFlc != flc && r.MaximumProtection?.Value is { } lowerMax)
-            r.MaximumProtection = new Result<decimal>(lowerMax, [
-                Step.Amps("Full-load current for the 430.52 maximum", protectionFlc, "common practice, no source",
-                    $"{Format.Number(r.Horsepower)} hp row gives {Format.Amps(flc)} for conductors; the next smaller row gives {Format.Amps(protectionFlc)}, so the maximum is never larger than the motor allows"),
-                .. r.MaximumProtection.Steps]);
-        CheckOverload(motor, r);
-        CheckDisconnectAndController(motor, r, flc, power.Value);
+        r.FireService = Get(motor, m => m.FireService)?.Value;
+        if (r.FireService == FireServiceRole.FirePump)
+        {
+            CheckFirePumpProtection(motor, r, flc, phases, design);
+        }
+        else
+        {
+            CheckProtection(motor, r, protectionFlc, phases, kind, design, efficiency, starting);
+            if (protectionFlc != flc && r.MaximumProtection?.Value is { } lowerMax)
+                r.MaximumProtection = new Result<decimal>(lowerMax, [
+                    Step.Amps("Full-load current for the 430.52 maximum", protectionFlc, "common practice, no source",
+                        $"{Format.Number(r.Horsepower)} hp row gives {Format.Amps(flc)} for conductors; the next smaller row gives {Format.Amps(protectionFlc)}, so the maximum is never larger than the motor allows"),
+                    .. r.MaximumProtection.Steps]);
+        }
+
+        if (r.FireService is FireServiceRole.PressureMaintenance) r.FirePumpLockedRotor = FirePumpLockedRotor(motor, r, phases, design);
+        if (r.FireService == FireServiceRole.FirePump)
+            CheckFirePumpOverload(motor, r);
+        else
+            CheckOverload(motor, r, starting);
+        CheckDisconnectAndController(motor, r, flc, power.Value, starting, driveInput);
         CheckGround(motor, r, protectionFlc, phases, kind, design, efficiency, settings);
         LockedRotor(motor, r, phases, design);
         CheckVoltageDrop(motor, r, flc, settings);
+        if (r.FireService == FireServiceRole.FirePump) FirePumpBranchDrops(motor, r, flc, settings);
         CheckConduit(motor, r, phases, settings);
         return r;
     }
@@ -220,7 +234,7 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
             $"wire {wire.Value} is permitted for {Format.Amps(current)} only {verdict.Reason}; the list cannot show these, so they are not checked");
     }
 
-    private void CheckProtection(MotorNode motor, MotorResult r, decimal flc, Phases phases, MotorKind kind, DesignLetter? design, Efficiency efficiency)
+    private void CheckProtection(MotorNode motor, MotorResult r, decimal flc, Phases phases, MotorKind kind, DesignLetter? design, Efficiency efficiency, StartingMethod starting)
     {
         var device = Get(motor, m => m.Protection, out var deviceOwner);
         var rating = Get(motor, m => m.ProtectionRating, out var ratingOwner);
@@ -238,7 +252,12 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         r.ProtectionRating = rating?.Value.Value;
         var hardStart = _likes.Has(motor, static m => m.HardStart);
         r.ProtectionBasis = new ProtectionInput(flc, r.Device, phases, kind, design, efficiency, hardStart);
-        r.MaximumProtection = cache.MaximumProtection(r.ProtectionBasis.Value);
+        var input = r.ProtectionBasis.Value;
+        r.MaximumProtection = cache.MaximumProtection(input);
+        // 430.4: a part-winding motor's devices are limited per winding unless the list says one protects both (the stricter reading when not said).
+        var windings = starting == StartingMethod.PartWinding ? Get(motor, m => m.ProtectionWindings)?.Value ?? WindingScope.PerWinding : (WindingScope?)null;
+        if (windings is { } scope) r.MaximumProtection = PartWinding.MaximumProtection(r.MaximumProtection, input, scope);
+        var windingWord = windings is null || Get(motor, m => m.ProtectionWindings) is not null ? "" : " per-winding";
         if (r.MaximumProtection.Value is not { } max)
         {
             Add(FindingCodes.CannotCheck, Severity.Warning, device is null ? motor.Header.KeywordToken.Range : RangeOn(motor, deviceOwner, device.Range),
@@ -254,7 +273,7 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         {
             Add(FindingCodes.NotWritten, Severity.Information, motor.Header.KeywordToken.Range,
                 $"no short-circuit protection given; NEC 430.52 allows an {deviceName} up to {Format.Amps(max)}",
-                Insert(motor, $"protection inverse-time-breaker {MaxText()}", "Add the maximum inverse-time breaker"));
+                Insert(motor, $"protection inverse-time-breaker {MaxText()}{windingWord}", "Add the maximum inverse-time breaker"));
             return;
         }
 
@@ -270,13 +289,13 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         var value = rating.Value.Value;
         if (value > max)
         {
-            var rule = hardStart ? "NEC 430.52(C)(1)(b)" : "NEC 430.52(C)(1)";
-            Add(FindingCodes.ProtectionTooLarge, Severity.Error, RangeOn(motor, ratingOwner, rating.Range),
+            var rule = windings is not null ? "NEC 430.4" : hardStart ? "NEC 430.52(C)(1)(b)" : "NEC 430.52(C)(1)";
+            Add(windings is null ? FindingCodes.ProtectionTooLarge : FindingCodes.PartWindingProtectionTooLarge, Severity.Error, RangeOn(motor, ratingOwner, rating.Range),
                 $"{deviceName} {unit} {Format.Amps(value)} is above the {Format.Amps(max)} that {rule} allows for {Format.Amps(flc)} full-load current",
                 ReplaceOrOverride(motor, ratingOwner, "protection", "rating", MaxText(), $"Change the {unit} to {MaxText()}",
-                    overrideText: $"protection {Keywords.Devices.First(d => Equals(d.Value, r.Device)).Canonical} {MaxText()}"));
+                    overrideText: $"protection {Keywords.Devices.First(d => Equals(d.Value, r.Device)).Canonical} {MaxText()}{windingWord}"));
         }
-        else if (value < flc * 1.25m)
+        else if (value < flc * 1.25m && windings is null)
         {
             // Common practice, no source: below 125 % of full-load current a motor device opens on normal starting.
             Add(FindingCodes.ProtectionMayTrip, Severity.Warning, RangeOn(motor, ratingOwner, rating.Range),
@@ -284,7 +303,7 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         }
     }
 
-    private void CheckOverload(MotorNode motor, MotorResult r)
+    private void CheckOverload(MotorNode motor, MotorResult r, StartingMethod starting)
     {
         var nameplate = Get(motor, m => m.Nameplate)?.Value.Value;
         var sf = Get(motor, m => m.ServiceFactor)?.Value;
@@ -293,16 +312,25 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         decimal? rise = riseQuantity is { } q ? (q.Unit == Unit.Fahrenheit ? q.Value * 5m / 9m : q.Value) : null;
         r.OverloadLimit = cache.Overload(nameplate, sf, rise, absolute: false);
         r.OverloadAbsoluteLimit = cache.Overload(nameplate, sf, rise, absolute: true);
+        // 430.4: separate overloads on each half of a part-winding motor trip at one half (the stricter reading when not said).
+        var windings = starting == StartingMethod.PartWinding ? Get(motor, m => m.OverloadWindings)?.Value ?? WindingScope.PerWinding : (WindingScope?)null;
+        if (windings is { } scope)
+        {
+            r.OverloadLimit = PartWinding.Overload(r.OverloadLimit, scope, "Overload limit for each winding");
+            r.OverloadAbsoluteLimit = PartWinding.Overload(r.OverloadAbsoluteLimit, scope, "Overload maximum for each winding");
+        }
+
         var overload = Get(motor, m => m.Overload, out var owner);
         r.Overload = overload?.Value.Value;
         if (overload is null)
         {
             // 430.33: a duty-cycle motor is protected against overload by its branch device.
             if (Get(motor, m => m.Duty) is { Value: not DutyKind.Continuous }) return;
+            if (DriveProvidesOverload(motor, starting)) return;
             if (r.OverloadLimit.Value is { } limit)
                 Add(FindingCodes.OverloadMissing, Severity.Warning, motor.Header.KeywordToken.Range,
-                    $"no overload given; NEC 430.32(A)(1) requires one, rated at most {Format.Amps(limit)}",
-                    Insert(motor, $"overload {Format.Number(RoundDown(limit))}A", "Add the overload at its 430.32(A)(1) limit"));
+                    $"no overload given; NEC {(windings is null ? "430.32(A)(1)" : "430.32(A)(1) and 430.4")} requires one, rated at most {Format.Amps(limit)}",
+                    Insert(motor, $"overload {Format.Number(RoundDown(limit))}A{(windings is null ? "" : windings == WindingScope.PerWinding ? " per-winding" : "")}", "Add the overload at its 430.32(A)(1) limit"));
             else
                 Add(FindingCodes.CannotCheck, Severity.Warning, motor.Header.KeywordToken.Range,
                     "no overload and no nameplate current: NEC 430.32 overloads are sized from the nameplate");
@@ -326,9 +354,11 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
                 $"overload {Format.Amps(value)} is above the NEC 430.32(A)(1) limit of {Format.Amps(max)}; that is allowed only where the smaller device will not start the motor (430.32(C), up to {Format.Amps(absolute)})");
     }
 
-    private void CheckDisconnectAndController(MotorNode motor, MotorResult r, decimal flc, Quantity power)
+    private void CheckDisconnectAndController(MotorNode motor, MotorResult r, decimal flc, Quantity power, StartingMethod starting, decimal? driveInput)
     {
-        r.Disconnect = cache.Disconnect(flc, r.Horsepower);
+        // 430.128: a drive's disconnect is sized from the drive's rated input current, not the motor's.
+        var drive = starting == StartingMethod.Drive && driveInput is not null;
+        r.Disconnect = drive ? DriveCircuits.Disconnect(driveInput!.Value, r.Horsepower) : cache.Disconnect(flc, r.Horsepower);
         r.Controller = cache.Controller(r.Horsepower);
         // The NEMA sizes carried are those of polyphase ac starters: no suggestion for a single-phase or dc motor.
         if (r.Phases == Phases.Three)
@@ -342,7 +372,9 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
             // The next Table 240.6(A) rating at or above 115 % (a switch rated in between is rare; any rating ≥ 115 % complies).
             var fix = StandardRatings.AtOrAbove(need.MinimumAmps, fuse: false);
             Add(FindingCodes.DisconnectTooSmall, Severity.Error, RangeOn(motor, ampsOwner, amps.Range),
-                $"disconnect rated {Format.Amps(amps.Value.Value)} is below the {Format.Amps(need.MinimumAmps)} (115 % of {Format.Amps(flc)}) that NEC 430.110(A) requires"
+                (drive
+                    ? $"disconnect rated {Format.Amps(amps.Value.Value)} is below the {Format.Amps(need.MinimumAmps)} (115 % of the drive's rated input current {Format.Amps(driveInput!.Value)}) that NEC 430.128 requires"
+                    : $"disconnect rated {Format.Amps(amps.Value.Value)} is below the {Format.Amps(need.MinimumAmps)} (115 % of {Format.Amps(flc)}) that NEC 430.110(A) requires")
                 + (fix is { } f ? $": use {Format.Amps(f)}" : ""),
                 fix is { } value ? ReplaceOrOverride(motor, ampsOwner, "disconnect", "rating", $"{Format.Number(value)}A", $"Change the disconnect's ampere rating to {Format.Amps(value)}") : null);
         }
@@ -387,7 +419,7 @@ internal sealed class MotorSizer(MotorList model, EditBuilder edits, List<Findin
         var phase = WireToBeReplaced(r) && phaseMinimum is { } corrected ? corrected : r.Wire ?? phaseMinimum;
         if (r.Device == ProtectiveDevice.InstantaneousTripBreaker)
             r.MinimumGround = cache.GroundForInstantaneousTrip(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency), material, phase, phaseMinimum);
-        else if ((r.ProtectionRating ?? r.MaximumProtection?.Value) is { } device)
+        else if ((r.ProtectionRating ?? r.MaximumProtection?.Value ?? r.FirePumpMinimumProtection?.Value) is { } device)
             r.MinimumGround = cache.Ground(device, material, phase, phaseMinimum, "NEC 250.122(D)(1)");
         var ground = Get(motor, m => m.Ground, out var owner);
         if (r.MinimumGround?.Value is not { } min)

@@ -125,6 +125,9 @@ public abstract class CircuitNode(Statement header, BlockNode? parent) : BlockNo
     public Located<Quantity>? Conduit => Get<Quantity>("conduit", "trade-size");
     public Located<ProtectiveDevice>? Protection => Get<ProtectiveDevice>("protection", "device");
     public Located<Quantity>? ProtectionRating => Get<Quantity>("protection", "rating");
+    /// <summary>The protective device is stated to be listed for fire pump service.</summary>
+    public Located<bool>? ProtectionListed => Get<bool>("protection", "listing");
+    public Located<WindingScope>? ProtectionWindings => Get<WindingScope>("protection", "windings");
 }
 
 public sealed class FeederNode(Statement header, ProjectNode? project) : CircuitNode(header, project)
@@ -182,6 +185,11 @@ public sealed class MotorNode(Statement header, FeederNode feeder) : CircuitNode
     }
     public Located<NameplateBasis>? Application => Get<NameplateBasis>("application", "kind");
     public bool HardStart => Has("hard-start");
+    public Located<FireServiceRole>? FireService => Get<FireServiceRole>("fire-service", "role");
+    public Located<Quantity>? LockedRotorCurrent => Get<Quantity>("locked-rotor", "current");
+    public Located<WindingScope>? OverloadWindings => Get<WindingScope>("overload", "windings");
+    /// <summary>The drive provides the motor's overload protection (430.124(A)).</summary>
+    public Located<bool>? DriveOverload => Has("drive-overload") ? new Located<bool>(true, Statement("drive-overload")!.Range) : null;
 }
 
 public sealed class LoadNode(Statement header, FeederNode feeder) : CircuitNode(header, feeder)
@@ -191,4 +199,5 @@ public sealed class LoadNode(Statement header, FeederNode feeder) : CircuitNode(
     public Located<Quantity>? Current => Get<Quantity>("load", "current");
     public Located<Quantity>? ApparentPower => Get<Quantity>("load", "apparent-power");
     public bool Continuous => Get<bool>("load", "duty")?.Value ?? false;
+    public Located<FireServiceRole>? FireService => Get<FireServiceRole>("fire-service", "role");
 }

@@ -95,6 +95,25 @@ public static class Keywords
         new("psc-fan", NameplateBasis.PscFan, "permanent-split-capacitor fan or blower motor: size from nameplate current"),
     ];
 
+    public static readonly WordChoice[] FireServiceRoles =
+    [
+        new("pump", FireServiceRole.FirePump, "drives a fire pump (Article 695): sized to carry locked-rotor current, no overload"),
+        new("pressure-maintenance", FireServiceRole.PressureMaintenance, "pressure maintenance (jockey) pump on the fire pump's supply", "jockey"),
+        new("accessory", FireServiceRole.Accessory, "fire pump accessory equipment on the fire pump's supply"),
+    ];
+
+    /// <summary>A word of our own on a protection line: the device is listed for fire pump service.</summary>
+    public static readonly WordChoice[] DeviceListings =
+    [
+        new("fire-pump-listed", true, "listed for fire pump service (695.4(B)(2)): accepted without the locked-rotor minimum"),
+    ];
+
+    public static readonly WordChoice[] WindingScopes =
+    [
+        new("per-winding", WindingScope.PerWinding, "one device for each winding connection of a part-winding motor (430.4)"),
+        new("both-windings", WindingScope.BothWindings, "one device for both windings of a part-winding motor (430.4 Exception)"),
+    ];
+
     public static readonly WordChoice[] LoadDuties =
     [
         new("continuous", true, "runs three hours or more at a time: counted at 125 %"),
@@ -140,8 +159,9 @@ public static class Keywords
         new("conduit", [Feeder, Motor], null, [new("trade-size", TradeSize, true, Check: Positive)],
             "Raceway trade size as installed, for the conduit-fill check (Chapter 9 Table 4)."),
         new("protection", [Feeder, Motor], null,
-            [new("device", Word, true, Devices), new("rating", Current, false, Check: Positive)],
-            "Short-circuit and ground-fault protective device and its rating."),
+            [new("device", Word, true, Devices), new("rating", Current, false, Check: Positive),
+             new("listing", Word, false, DeviceListings), new("windings", Word, false, WindingScopes)],
+            "Short-circuit and ground-fault protective device and its rating; optionally fire-pump-listed, and per-winding or both-windings."),
 
         new("nameplate", [Motor], null, [new("current", Current, true, Check: Positive)], "Nameplate full-load amperes (FLA), used for overloads."),
         new("service-factor", [Motor], null,
@@ -158,7 +178,8 @@ public static class Keywords
             "Duty and, for non-continuous duty, the motor's time rating (5, 15, 30 or 60 min; none = continuous rated)."),
         new("starting", [Motor], null, [new("method", Word, true, StartingMethods), new("input-current", Current, false, Check: Positive)],
             "Starting method; for a drive, its rated input current."),
-        new("overload", [Motor], null, [new("setting", Current, true, Check: Positive)], "Overload relay setting or heater rating."),
+        new("overload", [Motor], null, [new("setting", Current, true, Check: Positive), new("windings", Word, false, WindingScopes)],
+            "Overload relay setting or heater rating; for a part-winding motor, per-winding or both-windings."),
         new("disconnect", [Motor], null,
             [new("rating", Current, false, Check: Positive), new("power", Power, false, Check: Positive)],
             "Disconnecting means: ampere rating and horsepower rating."),
@@ -167,6 +188,11 @@ public static class Keywords
         new("like", [Motor], null, [new("motor", Tag, true)], "Take every attribute not given here from another motor."),
         new("application", [Motor], null, [new("kind", Word, true, Applications)],
             "Motors that 430.6(A) sizes from the nameplate current instead of the tables."),
+        new("fire-service", [Motor, Load], null, [new("role", Word, true, FireServiceRoles)],
+            "Part of a fire pump installation (Article 695): the fire pump, a pressure-maintenance pump or accessory equipment."),
+        new("locked-rotor", [Motor], null, [new("current", Current, true, Check: Positive)], "Nameplate locked-rotor amperes."),
+        new("drive-overload", [Motor], null, [],
+            "The drive is marked as providing the motor's overload protection (430.124(A)): no separate overload needed."),
         new("hard-start", [Motor], null, [],
             "The motor will not start on the Table 430.52(C)(1) rating: allow the 430.52(C)(1)(b) maximums."),
     ];

@@ -31,10 +31,9 @@ public static class Feeders
         var largest = units.OrderByDescending(m => m.FullLoadAmps).FirstOrDefault();
         if (largest is not null)
         {
-            var largestAmps = largest.DutyCycleAmps ?? largest.FullLoadAmps * 1.25m;
+            var (largestAmps, how) = LargestMotorAmps(largest, units);
             total += largestAmps;
-            steps.Add(Step.Amps("Largest motor", largestAmps, "NEC 430.24(1), 430.17",
-                largest.DutyCycleAmps is null ? $"125 % × {Format.Amps(largest.FullLoadAmps)} ({largest.Tag})" : $"{largest.Tag} at its duty-cycle current"));
+            steps.Add(Step.Amps("Largest motor", largestAmps, largest.DutyCycleAmps is null ? "NEC 430.24(1), 430.17" : "NEC 430.24 Exception No. 1, 430.17", how));
             var others = units.Where(u => !ReferenceEquals(u, largest)).Sum(u => u.DutyCycleAmps ?? u.FullLoadAmps);
             if (others > 0)
             {
@@ -59,6 +58,20 @@ public static class Feeders
 
         steps.Add(Step.Amps("Required feeder ampacity", total, "NEC 430.24", "sum of the above"));
         return new Result<decimal>(total, [.. steps]);
+    }
+
+    /// <summary>
+    /// The largest motor's share: 125 % of its full-load current; for a duty-cycle motor (430.24
+    /// Exception No. 1) the greater of its 430.22(E) current and 125 % of the largest
+    /// continuous-duty motor's full-load current.
+    /// </summary>
+    private static (decimal Amps, string How) LargestMotorAmps(FeederMotor largest, List<FeederMotor> units)
+    {
+        if (largest.DutyCycleAmps is not { } duty) return (largest.FullLoadAmps * 1.25m, $"125 % × {Format.Amps(largest.FullLoadAmps)} ({largest.Tag})");
+        var continuous = units.Where(u => u.DutyCycleAmps is null).OrderByDescending(u => u.FullLoadAmps).FirstOrDefault();
+        if (continuous is null || continuous.FullLoadAmps * 1.25m <= duty) return (duty, $"{largest.Tag} at its 430.22(E) duty-cycle current");
+        return (continuous.FullLoadAmps * 1.25m,
+            $"125 % × {Format.Amps(continuous.FullLoadAmps)} ({continuous.Tag}, the largest continuous-duty motor), greater than {largest.Tag}'s 430.22(E) current {Format.Amps(duty)}");
     }
 
     /// <summary>
