@@ -49,7 +49,8 @@ public static class FirePump
         if (tableMaximum?.Value is { } table)
         {
             candidates.Add(table);
-            steps.Add(Step.Amps("Table locked-rotor current", table, "NEC Table 430.251(A)/(B)", "the table maximum for the motor's horsepower and voltage"));
+            var rule = tableMaximum.Steps.Length > 0 ? tableMaximum.Steps[0].Rule : "NEC Table 430.251(B)";
+            steps.Add(Step.Amps("Table locked-rotor current", table, rule, "the table maximum for the motor's horsepower and rated voltage"));
         }
 
         var onlyFloor = candidates.Count == 1 && nameplateAmps is null && tableMaximum?.Value is null && codeLetter?.Value is { Maximum: null };
