@@ -166,4 +166,17 @@ public class FirePumpTests
         Assert.Equal(Severity.Information, f.Severity);
         Assert.Contains("curve was not checked", f.Message);
     }
+
+    // What is not checked is said on the circuit: a fire pump lists the Article 695 rules MotorLang leaves out, an ordinary motor does not.
+    [Fact]
+    public void FirePumpCircuitsSayWhatIsNotChecked()
+    {
+        var analysis = Analyzer.Analyze(Pump());
+        var motor = Coverage.CircuitCoverage.For(analysis.Motors.Values.Single());
+        Assert.Contains(motor.NotChecked, n => n.Rule == "695.3");
+        Assert.Contains(motor.Applied, a => a.Rule == "695.4(B)(2)(a)(1)");
+        Assert.Contains(Coverage.CircuitCoverage.For(analysis.Feeders.Values.Single()).NotChecked, n => n.Rule == "695.6(A), 695.6(B)");
+        var plain = Analyzer.Analyze(Text(Base));
+        Assert.DoesNotContain(Coverage.CircuitCoverage.For(plain.Motors.Values.Single()).NotChecked, n => n.Rule.StartsWith("695", StringComparison.Ordinal));
+    }
 }

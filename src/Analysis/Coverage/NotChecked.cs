@@ -19,6 +19,8 @@ public enum Reach
     NoConduit,
     /// <summary>Motors and feeders over 1000 V, which MotorLang does not size at all.</summary>
     OverThousandVolts,
+    /// <summary>Fire pump motors (<c>fire-service pump</c>) and the feeders that supply them.</summary>
+    FirePump,
 }
 
 /// <summary>A rule that bears on a circuit but that MotorLang does not check: the rule, what it covers (one line), and why it is left out.</summary>
@@ -74,6 +76,17 @@ public static class NotChecked
             "loads are added at the amperes or kVA written", Reach.EveryFeeder),
         new("Article 230", "service conductors and service equipment",
             "every feeder is sized as a feeder, including one written without 'from'", Reach.EveryFeeder),
+        new("695.3", "whether the fire pump's power source is reliable and of a kind 695.3 permits",
+            "the list does not say what the source is", Reach.FirePump),
+        new("695.4(B)(3)", "the fire pump disconnecting means: lockable closed, marked, supervised, located apart from others",
+            "the list does not record the disconnect's construction or location", Reach.FirePump),
+        new("695.6(A), 695.6(B)", "routing and fire protection of the supply conductors (outside the building, or under fire-rated protection)",
+            "the list does not say where the wiring runs", Reach.FirePump),
+        new("695.6(E)", "the wiring method from the controller to the fire pump motor (lettering from memory)",
+            "the list records conductors, not wiring methods", Reach.FirePump),
+        new("695.10", "listing of the fire pump controller and transfer switch for fire pump service",
+            "MotorLang holds no product data", Reach.FirePump),
+        new("695.14", "fire pump control wiring", "control wiring is not part of the list", Reach.FirePump),
     ];
 
     /// <summary>What is not checked on a motor's branch circuit.</summary>
@@ -84,6 +97,7 @@ public static class NotChecked
         Reach.NoLength => motor.BranchDrop?.HasValue != true,
         Reach.NoConduit => motor.ConduitFillPercent is null,
         Reach.OverThousandVolts => Math.Max(motor.RatedVolts, motor.Volts) > SystemVoltages.LowVoltageLimit,
+        Reach.FirePump => motor.FireService == FireServiceRole.FirePump,
         _ => false,
     }).ToList();
 
@@ -94,6 +108,7 @@ public static class NotChecked
         Reach.NoLength => feeder.Drop?.HasValue != true,
         Reach.NoConduit => feeder.ConduitFillPercent is null,
         Reach.OverThousandVolts => feeder.Volts > SystemVoltages.LowVoltageLimit,
+        Reach.FirePump => feeder.SuppliesFirePump,
         _ => false,
     }).ToList();
 
@@ -106,6 +121,7 @@ public static class NotChecked
         Reach.NoLength => "motors and feeders with no `length`",
         Reach.NoConduit => "motors and feeders with no `conduit`",
         Reach.OverThousandVolts => "motors and feeders over 1000 V",
+        Reach.FirePump => "fire pumps and their feeders",
         _ => "every feeder",
     };
 }

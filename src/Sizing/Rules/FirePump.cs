@@ -81,7 +81,7 @@ public static class FirePump
                 FireServiceRole.FirePump => (p.LockedRotorAmps!.Value, "fire pump, locked-rotor current", "NEC 695.4(B)(2)(a)(1)"),
                 FireServiceRole.PressureMaintenance => (p.LockedRotorAmps!.Value, "pressure maintenance pump, locked-rotor current", "NEC 695.4(B)(2)(a)(1)"),
                 FireServiceRole.Accessory => (p.FullLoadAmps, "accessory equipment, full-load current", "NEC 695.4(B)(2)(a)(1)"),
-                _ => (p.FullLoadAmps, "other load on the same supply, full-load current", "conservative reading: the device carries it too"),
+                _ => (p.FullLoadAmps, "other load on the same supply, full-load current (conservative reading: the device carries it too)", "NEC 695.4(B)(2)(a)(1)"),
             };
             total += amps * p.Quantity;
             steps.Add(Step.Amps(p.Tag, amps * p.Quantity, rule, p.Quantity > 1 ? $"{what} × {p.Quantity}" : what));
@@ -113,7 +113,7 @@ public static class FirePump
             Step.Amps("Fire pump and pressure maintenance motors", motors * 1.25m, "NEC 695.6(C)", $"125 % × {Format.Amps(motors)} (sum of their full-load currents)"),
         };
         if (accessories > 0) steps.Add(Step.Amps("Accessory equipment", accessories, "NEC 695.6(C)", "100 %"));
-        if (others > 0) steps.Add(Step.Amps("Other loads on the supply", others * 1.25m, "conservative reading", $"125 % × {Format.Amps(others)}"));
+        if (others > 0) steps.Add(Step.Amps("Other loads on the supply", others * 1.25m, "NEC 695.6(C), 430.24", $"125 % × {Format.Amps(others)}, as 430.24 counts a continuous load (conservative reading)"));
         steps.Add(Step.Amps("Required ampacity (fire pump supply)", total, "NEC 695.6(C)", "sum of the above"));
         return new Result<decimal>(total, [.. steps]);
     }
