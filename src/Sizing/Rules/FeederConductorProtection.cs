@@ -10,9 +10,10 @@ public static class FeederConductorProtection
     /// </summary>
     public static Result<decimal> Maximum(Result<decimal> partA, decimal? wireAmpacity, decimal requiredAmpacity, bool fuse)
     {
-        if (wireAmpacity is not { } ampacity || ampacity <= requiredAmpacity) return partA;
+        // Where 430.62(A) gives no limit (a device MotorLang cannot size, a motor with no maximum) neither does (B).
+        if (partA.Value is null || wireAmpacity is not { } ampacity || ampacity <= requiredAmpacity) return partA;
         var byConductors = StandardRatings.AtOrBelow(ampacity, fuse);
-        if (byConductors is not { } rating || (partA.Value is { } a && a >= rating)) return partA;
+        if (byConductors is not { } rating || partA.Value >= rating) return partA;
         return new Result<decimal>(rating, [.. partA.Steps,
             Step.Amps("Conductor ampacity", ampacity, "NEC 430.62(B)", $"the feeder conductors carry more than the {Format.Amps(requiredAmpacity)} 430.24 requires"),
             Step.Amps("Maximum feeder protection", rating, "NEC 430.62(B), 240.6(A)",
