@@ -78,7 +78,7 @@ public static class NotChecked
             "every feeder is sized as a feeder, including one written without 'from'", Reach.EveryFeeder),
         new("695.3", "whether the fire pump's power source is reliable and of a kind 695.3 permits",
             "the list does not say what the source is", Reach.FirePump),
-        new("695.4(B)(3)", "the fire pump disconnecting means: lockable closed, marked, supervised, located apart from others",
+        new("695.4(B)(3)", "the fire pump disconnecting means (lockable closed, marked, supervised, located apart from others)",
             "the list does not record the disconnect's construction or location", Reach.FirePump),
         new("695.6(A), 695.6(B)", "routing and fire protection of the supply conductors (outside the building, or under fire-rated protection)",
             "the list does not say where the wiring runs", Reach.FirePump),
