@@ -88,12 +88,11 @@ public static class Breakdown
         else if (m.MaximumProtection is { } max)
             yield return new BreakdownSection("Short-circuit and ground-fault protection", max.Steps,
                 Compare(m.ProtectionRating, max.Value, "rating", atMost: true));
-        if (m.FireService == FireServiceRole.FirePump)
-            yield return new BreakdownSection("Overload",
-                [new Step("Overload protection", "none", "NEC 695.6(D)", "a fire pump's power circuit has no automatic overload protection")],
+        if (m.FireService == FireServiceRole.FirePump && m.NoOverloadRequired is { } none)
+            yield return new BreakdownSection("Overload", none.Steps,
                 m.Overload is { } written ? $"✗ an overload of {Format.Amps(written)} is written" : "✓ none written");
         if (m.OverloadLimit is { } ol)
-            yield return new BreakdownSection("Overload", ol.Steps.Concat(m.OverloadAbsoluteLimit?.Steps.Skip(1) ?? []).ToList(),
+            yield return new BreakdownSection("Overload", ol.Steps.Concat(m.OverloadAbsoluteLimit?.Steps.Skip(1) ?? []).Concat(m.NoOverloadRequired?.Steps ?? []).ToList(),
                 ol.Unavailable ?? Compare(m.Overload, ol.Value, "setting", atMost: true));
         if (m.MinimumGround is { } g)
             yield return new BreakdownSection("Grounding conductor", g.Steps,

@@ -84,6 +84,9 @@ public sealed class MotorResult(MotorNode motor)
     /// <summary>A fire pump's smallest permitted branch device (695.4(B)(2)(a)(1)); it replaces the 430.52 maximum.</summary>
     public Result<decimal>? FirePumpMinimumProtection { get; internal set; }
 
+    /// <summary>Why no overload is asked for: a fire pump (695.6(D)), or a drive that provides it (430.124(A)).</summary>
+    public Result<bool>? NoOverloadRequired { get; internal set; }
+
     /// <summary>The fire pump's protective device is stated to be listed for fire pump service.</summary>
     public bool FirePumpListedDevice { get; internal set; }
 

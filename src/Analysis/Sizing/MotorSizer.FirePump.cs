@@ -104,6 +104,8 @@ internal sealed partial class MotorSizer
     /// <summary>695.6(D): no automatic overload protection on a fire pump's power circuit, so never M203 and never an added overload.</summary>
     private void CheckFirePumpOverload(MotorNode motor, MotorResult r)
     {
+        r.NoOverloadRequired = Result<bool>.Of(true,
+            new Step("Overload protection", "none", "NEC 695.6(D)", "a fire pump's power circuit has no automatic overload protection"));
         var overload = Get(motor, m => m.Overload, out var owner);
         r.Overload = overload?.Value.Value;
         if (overload is null) return;
@@ -143,10 +145,16 @@ internal sealed partial class MotorSizer
     }
 
     /// <summary>430.124(A): a drive marked as providing the motor's overload protection needs no separate overload.</summary>
-    private bool DriveProvidesOverload(MotorNode motor, StartingMethod starting)
+    private bool DriveProvidesOverload(MotorNode motor, MotorResult r, StartingMethod starting)
     {
         if (Get(motor, m => m.DriveOverload) is not { } marked) return false;
-        if (starting == StartingMethod.Drive) return true;
+        if (starting == StartingMethod.Drive)
+        {
+            r.NoOverloadRequired = Result<bool>.Of(true,
+                new Step("Separate overload", "not required", "NEC 430.124(A)", "the drive is marked as providing the motor's overload protection"));
+            return true;
+        }
+
         Add(FindingCodes.CannotCheck, Severity.Warning, marked.Range,
             "'drive-overload' says a drive protects the motor, but the motor is not written as 'starting drive'; the overload is still required (NEC 430.124(A))");
         return false;

@@ -326,7 +326,7 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         {
             // 430.33: a duty-cycle motor is protected against overload by its branch device.
             if (Get(motor, m => m.Duty) is { Value: not DutyKind.Continuous }) return;
-            if (DriveProvidesOverload(motor, starting)) return;
+            if (DriveProvidesOverload(motor, r, starting)) return;
             if (r.OverloadLimit.Value is { } limit)
                 Add(FindingCodes.OverloadMissing, Severity.Warning, motor.Header.KeywordToken.Range,
                     $"no overload given; NEC {(windings is null ? "430.32(A)(1)" : "430.32(A)(1) and 430.4")} requires one, rated at most {Format.Amps(limit)}",
