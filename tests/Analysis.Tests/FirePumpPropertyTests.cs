@@ -1,7 +1,7 @@
 using CsCheck;
 using MotorLang.Analysis.Findings;
 using MotorLang.Analysis.Fixes;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 
 namespace MotorLang.Analysis.Tests;
 

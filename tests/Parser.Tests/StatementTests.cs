@@ -1,5 +1,5 @@
 using MotorLang.Parser.Values;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using static MotorLang.Parser.Tests.TestSupport;
 
 namespace MotorLang.Parser.Tests;

@@ -1,5 +1,5 @@
 using CsCheck;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using MotorLang.Sizing.Rules;
 using MotorLang.Sizing.Tables;
 

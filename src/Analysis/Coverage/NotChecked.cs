@@ -1,6 +1,6 @@
 using System.Collections.Immutable;
 using MotorLang.Analysis.Sizing;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 
 namespace MotorLang.Analysis.Coverage;
 

@@ -4,7 +4,7 @@ using MotorLang.Parser.Model;
 using MotorLang.Parser.Text;
 using MotorLang.Sizing;
 using MotorLang.Sizing.Rules;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 
 namespace MotorLang.Analysis.Editing;
 

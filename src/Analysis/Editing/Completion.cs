@@ -4,7 +4,7 @@ using MotorLang.Parser.Statements;
 using MotorLang.Parser.Syntax;
 using MotorLang.Parser.Text;
 using MotorLang.Sizing;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using MotorLang.Sizing.Rules;
 
 namespace MotorLang.Analysis.Editing;

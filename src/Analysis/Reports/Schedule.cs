@@ -1,7 +1,7 @@
 using MotorLang.Analysis.Coverage;
 using MotorLang.Analysis.Sizing;
 using MotorLang.Sizing;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using MotorLang.Sizing.Rules;
 using MotorLang.Sizing.Tables;
 

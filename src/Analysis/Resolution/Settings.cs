@@ -1,6 +1,6 @@
 using MotorLang.Parser.Model;
 using MotorLang.Parser.Values;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using MotorLang.Sizing.Rules;
 
 namespace MotorLang.Analysis.Resolution;

@@ -1,5 +1,5 @@
 using MotorLang.Sizing;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using MotorLang.Sizing.Rules;
 
 namespace MotorLang.Analysis.Sizing;

@@ -3,7 +3,7 @@ using MotorLang.Analysis.Fixes;
 using MotorLang.Parser.Diagnostics;
 using MotorLang.Parser.Model;
 using MotorLang.Sizing;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using MotorLang.Sizing.Rules;
 
 namespace MotorLang.Analysis.Sizing;

@@ -5,7 +5,7 @@ using MotorLang.Parser.Collections;
 using MotorLang.Parser.Diagnostics;
 using MotorLang.Parser.Model;
 using MotorLang.Parser.Text;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using MotorLang.Sizing.Rules;
 using MotorLang.Sizing;
 using MotorLang.Sizing.Tables;

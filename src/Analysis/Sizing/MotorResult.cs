@@ -1,7 +1,7 @@
 using MotorLang.Analysis.Findings;
 using MotorLang.Parser.Model;
 using MotorLang.Sizing;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using MotorLang.Sizing.Rules;
 
 namespace MotorLang.Analysis.Sizing;

@@ -6,7 +6,7 @@ using MotorLang.Parser.Model;
 using MotorLang.Parser.Statements;
 using MotorLang.Parser.Text;
 using MotorLang.Sizing;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using MotorLang.Sizing.Rules;
 
 namespace MotorLang.Analysis.Sizing;

@@ -7,7 +7,7 @@ using MotorLang.Parser.Statements;
 using MotorLang.Parser.Text;
 using MotorLang.Parser.Values;
 using MotorLang.Sizing;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using MotorLang.Sizing.Rules;
 using MotorLang.Sizing.Tables;
 

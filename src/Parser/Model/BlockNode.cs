@@ -1,6 +1,6 @@
 using MotorLang.Parser.Statements;
 using MotorLang.Parser.Values;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 
 namespace MotorLang.Parser.Model;
 

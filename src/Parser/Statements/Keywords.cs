@@ -1,4 +1,4 @@
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using static MotorLang.Parser.Statements.ArgKind;
 using static MotorLang.Parser.Statements.BlockKind;
 

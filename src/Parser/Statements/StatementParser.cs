@@ -3,7 +3,7 @@ using MotorLang.Parser.Diagnostics;
 using MotorLang.Parser.Syntax;
 using MotorLang.Parser.Text;
 using MotorLang.Parser.Values;
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 
 namespace MotorLang.Parser.Statements;
 

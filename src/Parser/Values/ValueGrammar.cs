@@ -1,4 +1,4 @@
-using MotorLang.Sizing.Tables;
+using MotorLang.Domain;
 using Sprache;
 
 namespace MotorLang.Parser.Values;

@@ -5,7 +5,7 @@ internal sealed class ValueReader
 {
     private readonly Dictionary<string, LexicalValue> _seen = new(StringComparer.Ordinal);
     private readonly Dictionary<(string, Unit), string> _canonical = [];
-    private readonly Dictionary<Sizing.Domain.WireSpec, string> _wires = [];
+    private readonly Dictionary<Domain.WireSpec, string> _wires = [];
 
     /// <summary>How the formatter writes a number with its unit; one string per distinct value.</summary>
     public string Canonical(LexicalValue.Number n)
@@ -15,7 +15,7 @@ internal sealed class ValueReader
         return text;
     }
 
-    public string Canonical(Sizing.Domain.WireSpec wire)
+    public string Canonical(Domain.WireSpec wire)
     {
         if (!_wires.TryGetValue(wire, out var text)) _wires[wire] = text = wire.ToString();
         return text;

@@ -1,4 +1,4 @@
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 using MotorLang.Sizing.Tables;
 
 namespace MotorLang.Sizing.Rules;

@@ -1,3 +1,4 @@
+using MotorLang.Domain;
 using MotorLang.Sizing.Tables;
 
 namespace MotorLang.Sizing.Rules;

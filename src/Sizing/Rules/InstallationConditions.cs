@@ -1,4 +1,4 @@
-using MotorLang.Sizing.Domain;
+using MotorLang.Domain;
 
 namespace MotorLang.Sizing.Rules;
 

@@ -1,4 +1,4 @@
-namespace MotorLang.Sizing.Domain;
+namespace MotorLang.Domain;
 
 public enum Phases { Dc = 0, Single = 1, Three = 3 }
 

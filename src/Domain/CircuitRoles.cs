@@ -1,4 +1,4 @@
-namespace MotorLang.Sizing.Domain;
+namespace MotorLang.Domain;
 
 /// <summary>What a motor or load is to a fire pump installation (Article 695); none for ordinary equipment.</summary>
 public enum FireServiceRole { FirePump, PressureMaintenance, Accessory }

@@ -1,4 +1,4 @@
-namespace MotorLang.Sizing.Domain;
+namespace MotorLang.Domain;
 
 /// <summary>
 /// A conductor size from the AWG/kcmil series used by the ampacity and conduit tables.
