@@ -3,6 +3,7 @@ using System.Text.Json;
 using MotorLang.Analysis;
 using MotorLang.Analysis.Findings;
 using MotorLang.Cli.Output;
+using MotorLang.Cli.Usage;
 using MotorLang.Parser.Diagnostics;
 using Spectre.Console;
 
@@ -11,19 +12,25 @@ namespace MotorLang.Cli;
 /// <summary>`motorlang check`: every finding as text, JSON or SARIF; exit 1 when there are errors.</summary>
 public static class CheckCommand
 {
-    public static Command Create(TextWriter stdout, TextWriter stderr)
+    public static Command Create(TextWriter stdout, TextWriter stderr, CliEnvironment env, Option<string> color)
     {
-        var paths = new Argument<string[]>("paths") { Description = "Motor-list files or folders", Arity = ArgumentArity.OneOrMore };
+        var paths = new Argument<string[]>("paths") { Description = "Motor-list files or folders, or - for standard input", Arity = ArgumentArity.OneOrMore };
         var format = new Option<string>("--format") { Description = "text, json or sarif", DefaultValueFactory = _ => "text" };
         format.AcceptOnlyFromAmong("text", "json", "sarif");
-        var command = new Command("check", "Check motor lists against the code and report problems") { paths, format };
+        var stdinName = Inputs.CreateStdinNameOption();
+        var severity = SharedOptions.SeverityFilter();
+        var quiet = SharedOptions.Quiet("the findings (no totals line)");
+        var command = new Command("check", "Check motor lists against the code and report problems") { paths, format, stdinName, severity, quiet };
         command.SetAction(result =>
         {
-            var files = SourceFiles.Expand(result.GetValue(paths)!, stderr);
-            var full = Analyze(files, stderr);
-            // Totals and the exit code count every finding; each file shows at most FindingCap.MaxShown.
+            var inputs = Inputs.Resolve(result.GetValue(paths)!, result.GetValue(stdinName), env, stderr);
+            var files = inputs.Names;
+            var full = Analyze(inputs, stderr, result.GetValue(quiet));
+            // Totals and the exit code count every finding; each file shows at most FindingCap.MaxShown of those the filter keeps.
             var all = full.SelectMany(r => r.Findings).ToList();
-            var reports = full.Select(r => (r.File, FindingCap.Shown(r.Findings))).ToList();
+            var level = result.GetValue(severity);
+            var reports = full.Select(r => (r.File, FindingCap.Shown(r.Findings.Where(f => SharedOptions.Shows(level, f.Severity)).ToList()))).ToList();
+            var colored = ColorChoice.Enabled(result.GetValue(color), env);
             switch (result.GetValue(format))
             {
                 case "json":
@@ -35,25 +42,27 @@ public static class CheckCommand
                 default:
                     foreach (var (file, findings) in reports)
                     {
-                        foreach (var f in findings) stdout.WriteLine(FindingText.Line(file, f));
+                        foreach (var f in findings) stdout.WriteLine(FindingText.Line(file, f, colored));
                     }
 
                     break;
             }
 
             int errors = all.Count(f => f.Severity == Severity.Error), warnings = all.Count(f => f.Severity == Severity.Warning);
-            stderr.WriteLine($"{files.Count} file{(files.Count == 1 ? "" : "s")} checked: {errors} error{(errors == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")}");
+            if (!result.GetValue(quiet))
+                stderr.WriteLine($"{files.Count} file{(files.Count == 1 ? "" : "s")} checked: {errors} error{(errors == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")}");
             return errors > 0 ? ExitCodes.Findings : ExitCodes.Clean;
         });
         return command;
     }
 
     /// <summary>Analyzes each file; with many files on an interactive terminal, shows progress on stderr.</summary>
-    private static List<(string File, IReadOnlyList<Finding> Findings)> Analyze(IReadOnlyList<string> files, TextWriter stderr)
+    private static List<(string File, IReadOnlyList<Finding> Findings)> Analyze(Inputs inputs, TextWriter stderr, bool quiet)
     {
+        var files = inputs.Names;
         var reports = new List<(string, IReadOnlyList<Finding>)>();
-        void One(string file) => reports.Add((file, Analyzer.Analyze(SourceFiles.Read(file)).Findings));
-        if (files.Count < 20 || Console.IsErrorRedirected || stderr != Console.Error)
+        void One(string file) => reports.Add((file, Analyzer.Analyze(inputs.Read(file)).Findings));
+        if (quiet || files.Count < 20 || Console.IsErrorRedirected || stderr != Console.Error)
         {
             foreach (var f in files) One(f);
             return reports;

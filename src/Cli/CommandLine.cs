@@ -1,25 +1,34 @@
 using System.CommandLine;
+using MotorLang.Cli.Usage;
 
 namespace MotorLang.Cli;
 
 /// <summary>The `motorlang` commands. Each command is a thin shell over the parser and analysis.</summary>
 public static class CommandLine
 {
-    public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr) => Run(args, stdout, stderr, CliEnvironment.Plain());
+
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, CliEnvironment env)
     {
         var root = new RootCommand("MotorLang: check, format and size motor lists (.motors) against NFPA 70-2023 Article 430.");
-        root.Subcommands.Add(CheckCommand.Create(stdout, stderr));
-        root.Subcommands.Add(FormatCommand.Create(stdout, stderr));
-        root.Subcommands.Add(ScheduleCommand.Create(stdout));
+        var color = ColorChoice.CreateOption();
+        root.Options.Add(color);
+        root.Subcommands.Add(CheckCommand.Create(stdout, stderr, env, color));
+        root.Subcommands.Add(FormatCommand.Create(stdout, stderr, env));
+        root.Subcommands.Add(ScheduleCommand.Create(stdout, env));
         root.Subcommands.Add(SizeCommand.Create(stdout, stderr));
         root.Subcommands.Add(DiffCommand.Create(stdout));
+        root.Subcommands.Add(ExplainCommand.Create(stdout));
         root.Subcommands.Add(LspCommand.Create());
 
         var parsed = root.Parse(args);
-        if (parsed.Errors.Count > 0)
+        var unknown = UnknownWords.Find(parsed);
+        if (unknown.Count > 0 || parsed.Errors.Count > 0)
         {
-            foreach (var e in parsed.Errors) stderr.WriteLine($"motorlang: {e.Message}");
-            stderr.WriteLine("Run 'motorlang --help' for usage.");
+            // Our messages name the unknown word with a suggestion; the library's would repeat it without one.
+            foreach (var m in unknown.Count > 0 ? unknown : parsed.Errors.Select(e => e.Message)) stderr.WriteLine($"motorlang: {m}");
+            var name = parsed.CommandResult.Command is RootCommand ? "motorlang" : $"motorlang {parsed.CommandResult.Command.Name}";
+            stderr.WriteLine($"Run '{name} --help' for usage.");
             return ExitCodes.Usage;
         }
 

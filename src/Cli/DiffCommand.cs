@@ -16,7 +16,8 @@ public static class DiffCommand
         var newArg = new Argument<string>("new") { Description = "A file, or a git revision and path" };
         var format = new Option<string>("--format") { Description = "text or json", DefaultValueFactory = _ => "text" };
         format.AcceptOnlyFromAmong("text", "json");
-        var command = new Command("diff", "Compare two versions of a motor list by tag") { oldArg, newArg, format };
+        var exitCode = new Option<bool>("--exit-code") { Description = "Exit 1 when the versions differ, 0 when they do not" };
+        var command = new Command("diff", "Compare two versions of a motor list by tag") { oldArg, newArg, format, exitCode };
         command.SetAction(result =>
         {
             var before = Analyzer.Analyze(Read(result.GetValue(oldArg)!));
@@ -28,7 +29,7 @@ public static class DiffCommand
                 stdout.WriteLine("no changes");
             else
                 foreach (var c in changes) stdout.WriteLine(ListDiff.Describe(c));
-            return ExitCodes.Clean;
+            return result.GetValue(exitCode) && changes.Count > 0 ? ExitCodes.Findings : ExitCodes.Clean;
         });
         return command;
     }

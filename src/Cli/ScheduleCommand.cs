@@ -4,14 +4,14 @@ using System.Text.Json;
 using MotorLang.Analysis;
 using MotorLang.Analysis.Reports;
 using MotorLang.Cli.Output;
-using Spectre.Console;
+using MotorLang.Cli.Usage;
 
 namespace MotorLang.Cli;
 
 /// <summary>`motorlang schedule`: one row per motor, computed and specified sizes side by side, then feeder totals.</summary>
 public static class ScheduleCommand
 {
-    public static Command Create(TextWriter stdout)
+    public static Command Create(TextWriter stdout, CliEnvironment env)
     {
         var file = new Argument<string>("file") { Description = "A motor-list file" };
         var format = new Option<string>("--format") { Description = "table, csv, markdown or json", DefaultValueFactory = _ => "table" };
@@ -27,7 +27,7 @@ public static class ScheduleCommand
                 "csv" => Csv(schedule),
                 "markdown" => Markdown(schedule),
                 "json" => JsonSerializer.Serialize(schedule, JsonReport.Options) + "\n",
-                _ => Table(schedule),
+                _ => ScheduleTable.Render(schedule, env.OutputIsTerminal ? env.TerminalWidth : null, FeederHeaders, FeederCells),
             });
             return analysis.HasErrors ? ExitCodes.Findings : ExitCodes.Clean;
         });
@@ -64,25 +64,6 @@ public static class ScheduleCommand
         Row(FeederHeaders.Select(_ => "---"));
         foreach (var f in s.Feeders) Row(FeederCells(f));
         return sb.ToString();
-    }
-
-    private static string Table(Schedule s)
-    {
-        var writer = new StringWriter();
-        var console = AnsiConsole.Create(new AnsiConsoleSettings
-        {
-            Out = new AnsiConsoleOutput(writer), Ansi = AnsiSupport.No, ColorSystem = ColorSystemSupport.NoColors,
-        });
-        console.Profile.Width = 240;
-        var motors = new Table().Border(TableBorder.Simple);
-        foreach (var h in ScheduleRow.Headers.Where(h => h != "Description")) motors.AddColumn(Markup.Escape(h));
-        foreach (var r in s.Rows) motors.AddRow(r.Cells.Where((_, i) => ScheduleRow.Headers[i] != "Description").Select(Markup.Escape).ToArray());
-        console.Write(motors);
-        var feeders = new Table().Border(TableBorder.Simple);
-        foreach (var h in FeederHeaders) feeders.AddColumn(Markup.Escape(h));
-        foreach (var f in s.Feeders) feeders.AddRow(FeederCells(f).Select(Markup.Escape).ToArray());
-        console.Write(feeders);
-        return writer.ToString();
     }
 
     private static string Quote(string cell) =>

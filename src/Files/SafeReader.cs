@@ -30,6 +30,38 @@ public static class SafeReader
         }
     }
 
+    /// <summary>
+    /// Reads a stream that is not a file (standard input) under the same rules: at most the size
+    /// limit, strict UTF-8, BOM kept. <paramref name="name"/> is what messages call it.
+    /// </summary>
+    public static string ReadText(Stream stream, string name)
+    {
+        var bytes = new MemoryStream();
+        var buffer = new byte[81920];
+        int n;
+        try
+        {
+            while ((n = stream.Read(buffer, 0, buffer.Length)) > 0)
+            {
+                if (bytes.Length + n > MaxBytes) throw TooLarge(name, MaxBytes);
+                bytes.Write(buffer, 0, n);
+            }
+        }
+        catch (IOException e)
+        {
+            throw new FileRefusedException($"cannot read '{name}': {e.Message}");
+        }
+
+        try
+        {
+            return StrictUtf8.GetString(bytes.GetBuffer(), 0, (int)bytes.Length);
+        }
+        catch (DecoderFallbackException e)
+        {
+            throw new FileRefusedException($"'{name}' is not UTF-8 text (bad byte at offset {e.Index}); save it as UTF-8");
+        }
+    }
+
     internal static byte[] ReadBytes(string path, long maxBytes)
     {
         using var handle = OpenRegular(path);

@@ -6,8 +6,8 @@ namespace MotorLang.Cli.Output;
 /// <summary>The one-line text form shared by every command: file:line:col: severity code: message.</summary>
 public static class FindingText
 {
-    public static string Line(string file, Finding f) =>
-        $"{file}:{f.Range.Start.Line + 1}:{f.Range.Start.Column + 1}: {Name(f.Severity)} {f.Code}: {f.Message}";
+    public static string Line(string file, Finding f, bool color = false) =>
+        $"{file}:{f.Range.Start.Line + 1}:{f.Range.Start.Column + 1}: {Colors.Severity(f.Severity, Name(f.Severity), color)} {f.Code}: {f.Message}";
 
     public static string Name(Severity s) => s.ToString().ToLowerInvariant();
 }
