@@ -3,6 +3,7 @@ using System.Text;
 using System.Text.Json;
 using MotorLang.Analysis;
 using MotorLang.Analysis.Reports;
+using MotorLang.Analysis.Reports.Data;
 using MotorLang.Cli.Output;
 using MotorLang.Cli.Usage;
 
@@ -20,13 +21,14 @@ public static class ScheduleCommand
         command.SetAction(result =>
         {
             var path = result.GetValue(file)!;
-            var analysis = Analyzer.Analyze(SourceFiles.Read(SourceFiles.Expand([path])[0]));
+            var source = SourceFiles.Expand([path])[0];
+            var analysis = Analyzer.Analyze(SourceFiles.Read(source));
             var schedule = Schedule.Of(analysis);
             stdout.Write(result.GetValue(format) switch
             {
                 "csv" => Csv(schedule),
                 "markdown" => Markdown(schedule),
-                "json" => JsonSerializer.Serialize(schedule, JsonReport.Options) + "\n",
+                "json" => ScheduleJson.Write(ScheduleDataBuilder.Of(analysis, source)),
                 _ => ScheduleTable.Render(schedule, env.OutputIsTerminal ? env.TerminalWidth : null, FeederHeaders, FeederCells),
             });
             return analysis.HasErrors ? ExitCodes.Findings : ExitCodes.Clean;

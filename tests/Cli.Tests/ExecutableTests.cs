@@ -60,7 +60,7 @@ public sealed class ExecutableTests : IDisposable
     [InlineData("csv", "Feeder,Tag,Description,Power")]
     [InlineData("markdown", "| Feeder | Tag | Description |")]
     [InlineData("table", "Max protection")]
-    [InlineData("json", "\"Rows\"")]
+    [InlineData("json", "\"motors\"")]
     public void ScheduleFormats(string format, string expected)
     {
         var (code, output, _) = Executable.Run(_dir, "schedule", "--format", format, Example("dairy-bottling.motors"));
@@ -75,21 +75,21 @@ public sealed class ExecutableTests : IDisposable
         var (code, json, _) = Executable.Run(_dir, "schedule", "--format", "json", Example("dairy-bottling.motors"));
         Assert.Equal(0, code);
         AssertValid(Path.Combine(Executable.RepoRoot, "docs", "schemas", "schedule.schema.json"), json);
-        var rows = JsonNode.Parse(json)!["Rows"]!.AsArray();
-        string[] Rules(JsonNode row, string list) => row[list]!.AsArray().Select(i => (string)i!["Rule"]!).ToArray();
+        var rows = JsonNode.Parse(json)!["motors"]!.AsArray();
+        string[] Rules(JsonNode row, string list) => row[list]!.AsArray().Select(i => (string)i!["rule"]!).ToArray();
         // P-101 is a 15 hp motor across the line, H-201 runs on a drive (starting drive 62A).
-        var p101 = rows.Single(r => (string)r!["Tag"]! == "P-101")!;
-        var h201 = rows.Single(r => (string)r!["Tag"]! == "H-201")!;
+        var p101 = rows.Single(r => (string)r!["tag"]! == "P-101")!;
+        var h201 = rows.Single(r => (string)r!["tag"]! == "H-201")!;
         // Conductors at 125 % of FLC (NFPA 70-2023 430.22); on the drive, 125 % of its rated input (430.122(A)).
-        Assert.Contains("430.22", Rules(p101, "RulesApplied"));
-        Assert.Contains("430.122(A)", Rules(h201, "RulesApplied"));
+        Assert.Contains("430.22", Rules(p101, "rulesApplied"));
+        Assert.Contains("430.122(A)", Rules(h201, "rulesApplied"));
         // Short-circuit current ratings (110.10) are never checked; drive overtemperature (430.126) only concerns the drive.
-        Assert.Contains("110.10, 409.22, 430.8", Rules(p101, "NotChecked"));
-        Assert.Contains("430.126", Rules(h201, "NotChecked"));
-        Assert.DoesNotContain("430.126", Rules(p101, "NotChecked"));
-        var feeder = JsonNode.Parse(json)!["Feeders"]![0]!;
-        Assert.Contains("430.24", Rules(feeder, "RulesApplied"));
-        Assert.Contains("430.28, 240.21", Rules(feeder, "NotChecked"));
+        Assert.Contains("110.10, 409.22, 430.8", Rules(p101, "notChecked"));
+        Assert.Contains("430.126", Rules(h201, "notChecked"));
+        Assert.DoesNotContain("430.126", Rules(p101, "notChecked"));
+        var feeder = JsonNode.Parse(json)!["feeders"]![0]!;
+        Assert.Contains("430.24", Rules(feeder, "rulesApplied"));
+        Assert.Contains("430.28, 240.21", Rules(feeder, "notChecked"));
     }
 
     [Fact]

@@ -1,0 +1,130 @@
+using MotorLang.Analysis.Coverage;
+
+namespace MotorLang.Analysis.Reports.Data;
+
+/// <summary>
+/// The motor schedule as typed data: what the JSON, CSV and spreadsheet outputs and the report all
+/// read. Numbers are <see cref="Measure"/>s (value and unit); a value that could not be worked out is
+/// null and its reason is in the row's <c>NotComputed</c>; conductor and raceway sizes are
+/// designations ("10 AWG", "2x 250 kcmil", "3/4"), so they stay text.
+/// </summary>
+public sealed record ScheduleData(int FormatVersion, TitleBlock Title, IReadOnlyList<MotorData> Motors, IReadOnlyList<FeederData> Feeders)
+{
+    /// <summary>Raised when a field is renamed, removed or changes meaning; adding a field keeps the version.</summary>
+    public const int CurrentFormatVersion = 1;
+}
+
+/// <summary>The project's title block: what identifies the issued schedule. Null where the list does not say.</summary>
+public sealed record TitleBlock(
+    string? Project, string? Number, string? Revision, string? Date, string? PreparedBy, string? CheckedBy);
+
+/// <summary>A finding on a schedule row: its code, severity (error, warning, information), 1-based line and message.</summary>
+public sealed record RowFinding(string Code, string Severity, int Line, string Message);
+
+/// <summary>A value of the row that was not worked out, and why (in words, never a guess).</summary>
+public sealed record NotComputed(string Field, string Reason);
+
+/// <summary>One motor: as written, as computed, and what was found. Field names are those of the JSON (camelCase).</summary>
+public sealed record MotorData
+{
+    /// <summary>The file the motor is written in, as the caller named it (null when the text came from elsewhere).</summary>
+    public string? File { get; init; }
+    /// <summary>1-based line of the motor's header.</summary>
+    public int Line { get; init; }
+    public string Feeder { get; init; } = "";
+    public string Tag { get; init; } = "";
+    public string Description { get; init; } = "";
+    /// <summary>How many identical motors the row stands for (<c>quantity</c>).</summary>
+    public int Quantity { get; init; } = 1;
+    /// <summary>Rated power as written (hp or kW).</summary>
+    public Measure? Power { get; init; }
+    /// <summary>System voltage the motor is sized at.</summary>
+    public Measure? Volts { get; init; }
+    /// <summary>Nameplate (rated) voltage.</summary>
+    public Measure? RatedVolts { get; init; }
+    /// <summary>1, 3, or 0 for direct current.</summary>
+    public int? Phases { get; init; }
+    /// <summary>How it is started, in the list's words (full-voltage, wye-delta, part-winding, soft-start, drive).</summary>
+    public string StartingMethod { get; init; } = "";
+    /// <summary>Nameplate full-load current, as written.</summary>
+    public Measure? NameplateCurrent { get; init; }
+    public decimal? ServiceFactor { get; init; }
+    public string? CodeLetter { get; init; }
+    public string? Design { get; init; }
+    /// <summary>The full-load current conductors, disconnect and protection are sized from (430.6(A)).</summary>
+    public Measure? FullLoadCurrent { get; init; }
+    public Measure? RequiredAmpacity { get; init; }
+    public string? MinimumWire { get; init; }
+    public string? Wire { get; init; }
+    public Measure? WireAmpacity { get; init; }
+    /// <summary>The protective device, in the list's words (inverse-time-breaker, dual-element-fuse, ...).</summary>
+    public string ProtectionDevice { get; init; } = "";
+    /// <summary>Largest branch short-circuit and ground-fault device permitted (430.52); null for a fire pump.</summary>
+    public Measure? MaximumProtection { get; init; }
+    /// <summary>A fire pump's smallest permitted device (695.4(B)(2)(a)(1)); null for other motors.</summary>
+    public Measure? MinimumProtection { get; init; }
+    /// <summary>The device rating as written.</summary>
+    public Measure? Protection { get; init; }
+    public Measure? OverloadLimit { get; init; }
+    public Measure? Overload { get; init; }
+    public Measure? DisconnectMinimumCurrent { get; init; }
+    public Measure? DisconnectMinimumPower { get; init; }
+    /// <summary>NEMA starter size for the motor's horsepower (ICS 2), when the table has it.</summary>
+    public string? StarterSize { get; init; }
+    public string? MinimumGround { get; init; }
+    public string? Ground { get; init; }
+    public string? MinimumConduit { get; init; }
+    public string? Conduit { get; init; }
+    public Measure? ConduitFill { get; init; }
+    /// <summary>One-way length as written (ft or m).</summary>
+    public Measure? Length { get; init; }
+    public Measure? BranchVoltageDrop { get; init; }
+    /// <summary>Drop from the source through the feeders and this branch.</summary>
+    public Measure? TotalVoltageDrop { get; init; }
+    /// <summary>ok, warnings or errors: the worst finding on the motor's lines.</summary>
+    public string Status { get; init; } = "ok";
+    public IReadOnlyList<RowFinding> Findings { get; init; } = [];
+    public IReadOnlyList<NotComputed> NotComputed { get; init; } = [];
+    public IReadOnlyList<AppliedRule> RulesApplied { get; init; } = [];
+    public IReadOnlyList<NotCheckedNote> NotChecked { get; init; } = [];
+}
+
+/// <summary>One feeder: its load, conductors and protection, and what was found on its own lines.</summary>
+public sealed record FeederData
+{
+    public string? File { get; init; }
+    public int Line { get; init; }
+    public string Tag { get; init; } = "";
+    public string Description { get; init; } = "";
+    /// <summary>The feeder or switchboard it is supplied from, as written.</summary>
+    public string? From { get; init; }
+    public Measure? Volts { get; init; }
+    public int? Phases { get; init; }
+    /// <summary>How many motor rows it supplies directly.</summary>
+    public int MotorCount { get; init; }
+    /// <summary>Running load: full-load currents of everything supplied through it, at 100 %.</summary>
+    public Measure? CalculatedLoad { get; init; }
+    public Measure? RequiredAmpacity { get; init; }
+    public string? MinimumWire { get; init; }
+    public string? Wire { get; init; }
+    public Measure? WireAmpacity { get; init; }
+    public string ProtectionDevice { get; init; } = "";
+    public Measure? MaximumProtection { get; init; }
+    public Measure? MinimumProtection { get; init; }
+    public Measure? Protection { get; init; }
+    public string? MinimumGround { get; init; }
+    public string? Ground { get; init; }
+    public string? MinimumConduit { get; init; }
+    public string? Conduit { get; init; }
+    public Measure? ConduitFill { get; init; }
+    public Measure? Length { get; init; }
+    public Measure? VoltageDrop { get; init; }
+    /// <summary>Drop from the source to this feeder's load end.</summary>
+    public Measure? TotalVoltageDrop { get; init; }
+    public bool SuppliesFirePump { get; init; }
+    public string Status { get; init; } = "ok";
+    public IReadOnlyList<RowFinding> Findings { get; init; } = [];
+    public IReadOnlyList<NotComputed> NotComputed { get; init; } = [];
+    public IReadOnlyList<AppliedRule> RulesApplied { get; init; } = [];
+    public IReadOnlyList<NotCheckedNote> NotChecked { get; init; } = [];
+}

@@ -1,0 +1,166 @@
+using MotorLang.Analysis.Findings;
+using MotorLang.Analysis.Resolution;
+using MotorLang.Analysis.Sizing;
+using MotorLang.Domain;
+using MotorLang.Parser.Diagnostics;
+using MotorLang.Parser.Model;
+using MotorLang.Parser.Statements;
+using MotorLang.Sizing;
+
+namespace MotorLang.Analysis.Reports.Data;
+
+/// <summary>Builds the typed schedule of one analysed document, in line order.</summary>
+public static class ScheduleDataBuilder
+{
+    /// <param name="file">How the caller names the document (a path); Analysis itself knows no files.</param>
+    public static ScheduleData Of(AnalysisResult analysis, string? file = null)
+    {
+        // Findings by line, once, so each row collects its own lines' findings: linear in the list's size.
+        var byLine = new Dictionary<int, List<Finding>>();
+        foreach (var f in analysis.Findings)
+        {
+            if (!byLine.TryGetValue(f.Range.Start.Line, out var list)) byLine[f.Range.Start.Line] = list = [];
+            list.Add(f);
+        }
+
+        var model = analysis.Parse.Model;
+        var motors = analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index)
+            .Select(m => Motor(m, model, file, FindingsOn(byLine, m.Motor.Header.Line.Index, m.Motor.LastLine))).ToList();
+        var feeders = analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index)
+            .Select(f => Feeder(f, file, FindingsOn(byLine, f.Feeder.Header.Line.Index, f.Feeder.LastOwnLine))).ToList();
+        return new ScheduleData(ScheduleData.CurrentFormatVersion, TitleBlocks.Of(model), motors, feeders);
+    }
+
+    private static MotorData Motor(MotorResult m, MotorList model, string? file, IReadOnlyList<RowFinding> findings)
+    {
+        var node = m.Motor;
+        T? Own<T>(Func<MotorNode, Located<T>?> get) where T : struct => Likes.Get(node, model, get) is { } v ? v.Value.Value : null;
+        var missing = new List<NotComputed>();
+        var fireMinimum = Value(m.FirePumpMinimumProtection, "minimumProtection", missing);
+        var maximum = Value(m.MaximumProtection, "maximumProtection", missing);
+        if (maximum is { } max && m.Device == ProtectiveDevice.InstantaneousTripBreaker) maximum = decimal.Floor(max); // a setting at or below the limit
+        var disconnect = m.Disconnect?.Value;
+        if (m.Disconnect is { Unavailable: { } why }) missing.Add(new NotComputed("disconnect", why));
+        var row = new MotorData
+        {
+            File = file,
+            Line = node.Header.Line.Index + 1,
+            Feeder = node.Feeder.Tag?.Value ?? "",
+            Tag = m.Tag,
+            Description = node.Description?.Value ?? "",
+            Quantity = m.Quantity,
+            Power = node.Power is { } p ? Measure.Written(p.Value) : null,
+            Volts = m.Volts > 0 ? Measure.Of(m.Volts, Measure.Volts) : null,
+            RatedVolts = m.RatedVolts > 0 ? Measure.Of(m.RatedVolts, Measure.Volts) : null,
+            Phases = m.Volts > 0 ? (int)m.Phases : null,
+            StartingMethod = Word(Keywords.StartingMethods, m.StartingMethod),
+            NameplateCurrent = Own(n => n.Nameplate) is { } np ? Measure.Written(np) : null,
+            ServiceFactor = Own(n => n.ServiceFactor),
+            CodeLetter = Own(n => n.CodeLetter)?.ToString(),
+            Design = Own(n => n.Design)?.ToString(),
+            FullLoadCurrent = Measure.Of(Value(m.FullLoadCurrent, "fullLoadCurrent", missing), Measure.Amps),
+            RequiredAmpacity = Measure.Of(Value(m.RequiredAmpacity, "requiredAmpacity", missing), Measure.Amps),
+            MinimumWire = Value(m.MinimumWire, "minimumWire", missing)?.ToString(),
+            Wire = m.Wire?.ToString(),
+            WireAmpacity = Measure.Of(Value(m.WireAmpacity, "wireAmpacity", missing), Measure.Amps),
+            ProtectionDevice = m.DeviceUnknown ? "" : Word(Keywords.Devices, m.Device),
+            MaximumProtection = fireMinimum is null ? Measure.Of(maximum, Measure.Amps) : null,
+            MinimumProtection = Measure.Of(fireMinimum, Measure.Amps),
+            Protection = Measure.Of(m.ProtectionRating, Measure.Amps),
+            OverloadLimit = Measure.Of(Value(m.OverloadLimit, "overloadLimit", missing), Measure.Amps),
+            Overload = Measure.Of(m.Overload, Measure.Amps),
+            DisconnectMinimumCurrent = Measure.Of(disconnect?.MinimumAmps, Measure.Amps),
+            DisconnectMinimumPower = Measure.Of(disconnect?.MinimumHorsepower, Measure.Horsepower),
+            StarterSize = m.NemaStarterSize,
+            MinimumGround = Value(m.MinimumGround, "minimumGround", missing)?.ToString(),
+            Ground = m.Ground?.ToString(),
+            MinimumConduit = Value(m.MinimumConduit, "minimumConduit", missing)?.ToString(),
+            Conduit = Own(n => n.Conduit) is { } c ? Parser.Values.Quantity.Number(c.Value) : null,
+            ConduitFill = Measure.Of(m.ConduitFillPercent, Measure.Percent),
+            Length = Own(n => n.Length) is { } l ? Measure.Written(l) : null,
+            BranchVoltageDrop = Measure.Of(Value(m.BranchDrop, "branchVoltageDrop", missing)?.Percent, Measure.Percent),
+            TotalVoltageDrop = Measure.Of(m.TotalDropPercent, Measure.Percent),
+            Status = Status(findings),
+            Findings = findings,
+            NotComputed = missing,
+            RulesApplied = Coverage.RulesApplied.Of(m),
+            NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(m)),
+        };
+        return row;
+    }
+
+    private static FeederData Feeder(FeederResult f, string? file, IReadOnlyList<RowFinding> findings)
+    {
+        var node = f.Feeder;
+        var missing = new List<NotComputed>();
+        var fireMinimum = Value(f.FirePumpMinimumProtection, "minimumProtection", missing);
+        var maximum = Value(f.MaximumProtection, "maximumProtection", missing);
+        return new FeederData
+        {
+            File = file,
+            Line = node.Header.Line.Index + 1,
+            Tag = f.Tag,
+            Description = node.Description?.Value ?? "",
+            From = node.From?.Value,
+            Volts = f.Volts > 0 ? Measure.Of(f.Volts, Measure.Volts) : null,
+            Phases = f.Volts > 0 ? (int)f.Phases : null,
+            MotorCount = node.Motors.Count,
+            CalculatedLoad = Measure.Of(f.CalculatedLoad, Measure.Amps),
+            RequiredAmpacity = Measure.Of(Value(f.RequiredAmpacity, "requiredAmpacity", missing), Measure.Amps),
+            MinimumWire = Value(f.MinimumWire, "minimumWire", missing)?.ToString(),
+            Wire = f.Wire?.ToString(),
+            WireAmpacity = Measure.Of(Value(f.WireAmpacity, "wireAmpacity", missing), Measure.Amps),
+            ProtectionDevice = node.Protection is { } d ? Word(Keywords.Devices, d.Value) : "",
+            MaximumProtection = fireMinimum is null ? Measure.Of(maximum, Measure.Amps) : null,
+            MinimumProtection = Measure.Of(fireMinimum, Measure.Amps),
+            Protection = Measure.Of(f.ProtectionRating, Measure.Amps),
+            MinimumGround = Value(f.MinimumGround, "minimumGround", missing)?.ToString(),
+            Ground = f.Ground?.ToString(),
+            MinimumConduit = Value(f.MinimumConduit, "minimumConduit", missing)?.ToString(),
+            Conduit = node.Conduit is { } c ? Parser.Values.Quantity.Number(c.Value.Value) : null,
+            ConduitFill = Measure.Of(f.ConduitFillPercent, Measure.Percent),
+            Length = node.Length is { } l ? Measure.Written(l.Value) : null,
+            VoltageDrop = Measure.Of(Value(f.Drop, "voltageDrop", missing)?.Percent, Measure.Percent),
+            TotalVoltageDrop = Measure.Of(f.CumulativeDropPercent, Measure.Percent),
+            SuppliesFirePump = f.SuppliesFirePump,
+            Status = Status(findings),
+            Findings = findings,
+            NotComputed = missing,
+            RulesApplied = Coverage.RulesApplied.Of(f),
+            NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(f)),
+        };
+    }
+
+    /// <summary>A result's value; when it was attempted but could not be worked out, its reason is noted under the field's name.</summary>
+    private static T? Value<T>(Result<T>? r, string field, List<NotComputed> missing) where T : struct
+    {
+        if (r is { Value: null, Unavailable: { } why }) missing.Add(new NotComputed(field, why));
+        return r?.Value;
+    }
+
+    private static List<RowFinding> FindingsOn(Dictionary<int, List<Finding>> byLine, int first, int last)
+    {
+        var found = new List<RowFinding>();
+        for (var line = first; line <= last; line++)
+        {
+            if (!byLine.TryGetValue(line, out var list)) continue;
+            found.AddRange(list.Select(f => new RowFinding(f.Code, SeverityName(f.Severity), line + 1, f.Message)));
+        }
+
+        return found;
+    }
+
+    private static string Status(IReadOnlyList<RowFinding> findings) =>
+        findings.Any(f => f.Severity == "error") ? "errors" : findings.Any(f => f.Severity == "warning") ? "warnings" : "ok";
+
+    public static string SeverityName(Severity s) => s switch
+    {
+        Severity.Error => "error",
+        Severity.Warning => "warning",
+        _ => "information",
+    };
+
+    /// <summary>An enumerated value in the word the list uses for it, so machine output reads like the source.</summary>
+    private static string Word(IReadOnlyList<WordChoice> choices, object value) =>
+        choices.FirstOrDefault(c => c.Value.Equals(value))?.Canonical ?? value.ToString()!;
+}

@@ -1,0 +1,13 @@
+using MotorLang.Parser.Model;
+
+namespace MotorLang.Analysis.Reports.Data;
+
+/// <summary>Reads the title block from the project block.</summary>
+internal static class TitleBlocks
+{
+    public static TitleBlock Of(MotorList model)
+    {
+        var project = model.Project;
+        return new TitleBlock(project?.Name?.Value, null, null, null, null, null);
+    }
+}
