@@ -161,7 +161,7 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
                 _feeders.Add(feeder);
                 Register(feeder);
                 return feeder;
-            case "motor" when parent.Node is FeederNode f:
+            case "motor" or "compressor" when parent.Node is FeederNode f:
                 var motor = new MotorNode(header, f);
                 f.Add(motor);
                 Register(motor);

@@ -78,6 +78,7 @@ public class CoverageTests
     [InlineData("dairy-bottling.motors")]
     [InlineData("booster-station.motors")]
     [InlineData("cabinet-shop.motors")]
+    [InlineData("cold-storage.motors")]
     public void EveryExampleCircuitsHoverRulesAreInItsAppliedList(string example)
     {
         var dir = AppContext.BaseDirectory;

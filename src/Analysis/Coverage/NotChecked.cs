@@ -9,7 +9,12 @@ public enum Reach
 {
     /// <summary>Every motor branch circuit and every feeder.</summary>
     EveryCircuit,
+    /// <summary>Every motor and every motor-compressor.</summary>
     EveryMotor,
+    /// <summary>Motors sized under Article 430 ('motor'), not motor-compressors.</summary>
+    Motor,
+    /// <summary>Motor-compressors and marked equipment ('compressor', Article 440).</summary>
+    Compressor,
     /// <summary>Motors written with <c>starting drive</c>.</summary>
     DriveFedMotor,
     EveryFeeder,
@@ -48,14 +53,24 @@ public static class NotChecked
             "the list does not say where the equipment is", Reach.EveryCircuit),
         new("430.72–430.75", "motor control circuits (their conductors, protection and disconnection)",
             "control wiring is not part of the list", Reach.EveryMotor),
-        new("Article 440", "hermetic refrigerant motor-compressors (sized from rated-load and branch-circuit selection current)",
-            "every motor is sized under Article 430; a motor-compressor needs the Article 440 rules", Reach.EveryMotor),
+        new("Article 440", "a hermetic refrigerant motor-compressor written as a 'motor'",
+            "a 'motor' is sized under Article 430 from its horsepower; write 'compressor' for the Article 440 rules", Reach.Motor),
+        new("440.51–440.55", "motor-compressor overload protection (Article 440 Part VI)",
+            "MotorLang does not check it; listed equipment usually carries it inside", Reach.Compressor),
+        new("440.41", "the controller's continuous and locked-rotor current ratings",
+            "the list records a controller's horsepower only", Reach.Compressor),
+        new("440.12(B), 440.22(B)", "the disconnect and the device for equipment with several compressors or other loads when no minimum circuit ampacity and maximum protection are marked",
+            "MotorLang sizes the written compressor alone; a multimotor unit is checked against its marking", Reach.Compressor),
+        new("440.14", "where the disconnect is (within sight of and readily accessible from the equipment)",
+            "the list does not record where equipment is mounted", Reach.Compressor),
+        new("Article 440 Part VII", "room air conditioners (cord-and-plug connected, 440.60–440.65)",
+            "they are not modelled; a 'compressor' is a permanently connected circuit", Reach.Compressor),
         new("430.52(C)(1)(b), 430.32(C)", "whether the motor actually starts with the device and overload chosen",
-            "that needs the motor's acceleration and the devices' trip curves; MotorLang checks only the code limits", Reach.EveryMotor),
+            "that needs the motor's acceleration and the devices' trip curves; MotorLang checks only the code limits", Reach.Motor),
         new("430.102", "where the disconnect is (in sight of the controller and of the motor)",
-            "the list does not record where equipment is mounted", Reach.EveryMotor),
+            "the list does not record where equipment is mounted", Reach.Motor),
         new("430.37", "the number and placement of overload units",
-            "MotorLang checks an overload's rating, not how many units there are or which conductors they are in", Reach.EveryMotor),
+            "MotorLang checks an overload's rating, not how many units there are or which conductors they are in", Reach.Motor),
         new("430.126", "motor overtemperature protection when the drive runs the motor at reduced speed",
             "it depends on the drive's and the motor's own protection features, which the list does not carry", Reach.DriveFedMotor),
         new("430.130, 110.3(B)", "the branch device type and largest rating marked on the drive",
@@ -93,6 +108,8 @@ public static class NotChecked
     public static IReadOnlyList<NotCheckedRule> For(MotorResult motor) => All.Where(r => r.Reach switch
     {
         Reach.EveryCircuit or Reach.EveryMotor => true,
+        Reach.Motor => !motor.IsCompressor,
+        Reach.Compressor => motor.IsCompressor,
         Reach.DriveFedMotor => motor.StartingMethod == StartingMethod.Drive,
         Reach.NoLength => motor.BranchDrop?.HasValue != true,
         Reach.NoConduit => motor.ConduitFillPercent is null,
@@ -116,7 +133,9 @@ public static class NotChecked
     public static string Describe(Reach reach) => reach switch
     {
         Reach.EveryCircuit => "every motor and feeder",
-        Reach.EveryMotor => "every motor",
+        Reach.EveryMotor => "every motor and motor-compressor",
+        Reach.Motor => "every motor (not motor-compressors)",
+        Reach.Compressor => "motor-compressors",
         Reach.DriveFedMotor => "motors fed by a drive",
         Reach.NoLength => "motors and feeders with no `length`",
         Reach.NoConduit => "motors and feeders with no `conduit`",

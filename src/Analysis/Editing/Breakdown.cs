@@ -34,7 +34,7 @@ public static class Breakdown
         var motor = analysis.Motors.Values.FirstOrDefault(m => position.Line >= m.Motor.Header.Line.Index && position.Line <= m.Motor.LastLine);
         if (motor is not null)
         {
-            var whole = keyword == "motor";
+            var whole = keyword is "motor" or "compressor";
             var sections = whole ? MotorSections(motor).ToList() : MotorSections(motor).Where(s => Belongs(s.Heading, keyword)).ToList();
             if (sections.Count == 0)
             {
@@ -43,7 +43,8 @@ public static class Breakdown
             }
 
             // A single line's hover explains that line; the whole motor's says what was and was not checked.
-            return new BreakdownView($"{motor.Tag} — {motor.Motor.Power?.Value} motor", sections, range, whole ? CircuitCoverage.For(motor) : null);
+            var title = motor.IsCompressor ? $"{motor.Tag} — motor-compressor (Article 440)" : $"{motor.Tag} — {motor.Motor.Power?.Value} motor";
+            return new BreakdownView(title, sections, range, whole ? CircuitCoverage.For(motor) : null);
         }
 
         var feeder = analysis.Feeders.Values.FirstOrDefault(f => position.Line >= f.Feeder.Header.Line.Index && position.Line <= f.Feeder.LastOwnLine);
@@ -56,9 +57,11 @@ public static class Breakdown
     /// <summary>Which sections a statement line shows.</summary>
     private static bool Belongs(string heading, string? keyword) => keyword switch
     {
-        "wire" or "conductor" or "ambient" or "ccc" => heading is "Full-load current" or "Branch conductors" || heading.StartsWith("Written wire", StringComparison.Ordinal),
-        "protection" or "hard-start" => heading is "Full-load current" or "Short-circuit and ground-fault protection",
-        "locked-rotor" => heading is "Short-circuit and ground-fault protection" or "Locked-rotor current" or FirePumpVoltageHeading,
+        "wire" or "conductor" or "ambient" or "ccc" => heading is "Full-load current" or CompressorCurrent or "Branch conductors" || heading.StartsWith("Written wire", StringComparison.Ordinal),
+        "protection" or "hard-start" or "max-protection" => heading is "Full-load current" or CompressorCurrent or "Short-circuit and ground-fault protection",
+        "rated-load" or "selection-current" => heading is CompressorCurrent or "Branch conductors" or "Short-circuit and ground-fault protection" or "Disconnecting means",
+        "min-ampacity" => heading == "Branch conductors",
+        "locked-rotor" => heading is "Short-circuit and ground-fault protection" or "Locked-rotor current" or "Disconnecting means" or FirePumpVoltageHeading,
         "drive-overload" => heading == "Overload",
         "overload" or "nameplate" or "service-factor" or "temp-rise" => heading is "Full-load current" or "Overload",
         "ground" => heading == "Grounding conductor",
@@ -72,7 +75,7 @@ public static class Breakdown
 
     private static IEnumerable<BreakdownSection> MotorSections(MotorResult m)
     {
-        yield return new BreakdownSection("Full-load current", m.FullLoadCurrent.Steps, m.FullLoadCurrent.Unavailable);
+        yield return new BreakdownSection(m.IsCompressor ? CompressorCurrent : "Full-load current", m.FullLoadCurrent.Steps, m.FullLoadCurrent.Unavailable);
         if (m.RequiredAmpacity is { } req)
         {
             yield return new BreakdownSection("Branch conductors", req.Steps.Concat(m.MinimumWire?.Steps ?? []).ToList(), req.Unavailable);
@@ -97,7 +100,7 @@ public static class Breakdown
         if (m.MinimumGround is { } g)
             yield return new BreakdownSection("Grounding conductor", g.Steps,
                 m.Ground is { } written && g.Value is { } min ? (written >= min ? $"✓ {written} ≥ {min}" : $"✗ {written} is smaller than {min}") : null);
-        if (m.Disconnect is { } d) yield return new BreakdownSection("Disconnecting means", d.Steps);
+        if (m.Disconnect is { } d) yield return new BreakdownSection("Disconnecting means", d.Steps, d.Unavailable);
         if (m.Controller is { } c) yield return new BreakdownSection("Controller", c.Steps.Concat(m.NemaStarter?.Steps ?? []).ToList());
         if (m.BranchDrop is { } vd)
             yield return new BreakdownSection("Voltage drop", vd.Steps.Concat(m.StartingDrop?.Steps ?? []).ToList(),
@@ -135,6 +138,8 @@ public static class Breakdown
     }
 
     private const string FirePumpVoltageHeading = "Fire pump voltage (NEC 695.7)";
+
+    private const string CompressorCurrent = "Motor-compressor current";
 
     private static string Within(string what, decimal percent, decimal limit) =>
         percent <= limit ? $"✓ {what} {percent:0.##} % within {limit:0.##} %" : $"✗ {what} {percent:0.##} % above {limit:0.##} %";

@@ -23,7 +23,7 @@ public static class Outline
             nodes.Add(new OutlineNode(p.Name?.Value ?? "project", null, OutlineKind.Project, Block(p), p.Header.KeywordToken.Range, []));
         foreach (var f in parse.Model.Feeders)
         {
-            var children = f.Motors.Select(m => Leaf(m, OutlineKind.Motor, Block(m), m.Power?.Value.ToString()))
+            var children = f.Motors.Select(m => Leaf(m, OutlineKind.Motor, Block(m), m.IsCompressor ? "compressor" : m.Power?.Value.ToString()))
                 .Concat(f.Loads.Select(l => Leaf(l, OutlineKind.Load, Block(l), (l.Current ?? l.ApparentPower)?.Value.ToString())))
                 .OrderBy(n => n.Range.Start).ToList();
             nodes.Add(Leaf(f, OutlineKind.Feeder, Block(f), $"{f.Voltage?.Value} {f.Description?.Value}".Trim()) with { Children = children });

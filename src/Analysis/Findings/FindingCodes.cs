@@ -24,6 +24,11 @@ public static class FindingCodes
     public const string FirePumpRunningDrop = "M116";
     public const string PartWindingProtectionTooLarge = "M117";
     public const string SmallConductorNotPermitted = "M120";
+    public const string CompressorWireUndersized = "M130";
+    public const string CompressorProtectionTooLarge = "M131";
+    public const string CompressorDisconnectTooSmall = "M132";
+    /// <summary>A statement that means nothing for the kind of circuit it is on (a motor attribute under a compressor, or the reverse): it is not used.</summary>
+    public const string NotUsedHere = "M133";
 
     public const string ProtectionMayTrip = "M201";
     public const string VoltageDropHigh = "M202";

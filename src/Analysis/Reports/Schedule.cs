@@ -67,7 +67,7 @@ public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<Fee
             : findings.Any(f => f.Severity == Parser.Diagnostics.Severity.Warning) ? "warnings" : "ok";
         return new ScheduleRow(
             m.Motor.Feeder.Tag?.Value ?? "", m.Tag, m.Motor.Description?.Value ?? "",
-            m.Motor.Power is { } p ? p.Value.ToString() + (m.Quantity > 1 ? $" ×{m.Quantity}" : "") : "",
+            m.Motor.Power is { } p ? p.Value.ToString() + (m.Quantity > 1 ? $" ×{m.Quantity}" : "") : m.IsCompressor ? "compressor" + (m.Quantity > 1 ? $" ×{m.Quantity}" : "") : "",
             m.Volts > 0 ? $"{Format.Number(m.Volts)} V" : "",
             Amps(m.FullLoadCurrent), Text(m.MinimumWire), m.Wire?.ToString() ?? "",
             Protection(m), m.ProtectionRating is { } pr ? $"{Format.Amps(pr)} {Short(m.Device)}" : "",

@@ -76,8 +76,10 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
         var device = feeder.Protection?.Value ?? ProtectiveDevice.InverseTimeBreaker;
         var feederMotors = motorResults.Select(m => AsFeederMotor(m, device)).ToList();
         var loads = supplied.SelectMany(f => f.Loads).Select(l => LoadOf(l, r.Volts, r.Phases)).OfType<FeederLoad>().ToList();
-        r.CalculatedLoad = feederMotors.Sum(m => m.FullLoadAmps * m.Quantity) + loads.Sum(l => l.Amps);
-        r.RequiredAmpacity = Feeders.RequiredAmpacity(feederMotors, loads);
+        var equipmentLoads = EquipmentLoads(motorResults);
+        r.CalculatedLoad = feederMotors.Sum(m => m.FullLoadAmps * m.Quantity) + loads.Sum(l => l.Amps) + equipmentLoads.Sum(l => l.Amps);
+        r.RequiredAmpacity = WithCompressors(Feeders.RequiredAmpacity(feederMotors, [.. loads, .. equipmentLoads]), motorResults, "NEC 440.33",
+            "counted as motors at the rated-load or branch-circuit selection current, the larger; marked equipment's other loads are its minimum circuit ampacity less 125 % of that current");
         var fuse = device is ProtectiveDevice.DualElementFuse or ProtectiveDevice.NonTimeDelayFuse;
         var parts = FirePumpParts(supplied, motorResults, r.Volts, r.Phases);
         r.SuppliesFirePump = parts.Any(p => p.Role == FireServiceRole.FirePump);
@@ -87,7 +89,8 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
         else
             r.MaximumProtection = device == ProtectiveDevice.InstantaneousTripBreaker
                 ? Result<decimal>.Missing("an instantaneous-trip breaker is not a feeder protective device MotorLang can size (430.52(C)(3) permits one only in a listed combination motor controller on a motor branch circuit)")
-                : Feeders.MaximumProtection(feederMotors, loads, fuse);
+                : WithCompressors(Feeders.MaximumProtection(feederMotors, loads, fuse), motorResults, "NEC 430.62(A), 440.22",
+                    "a motor-compressor's branch device counts at its 440.22 maximum (under the marked maximum); marked equipment's other loads are left out, the lower limit");
         r.ProtectionRating = feeder.ProtectionRating?.Value.Value;
         var required = r.RequiredAmpacity.Value!.Value;
         if (required > 0) r.MinimumWire = cache.MinimumWire(required, settings.Conditions, false);

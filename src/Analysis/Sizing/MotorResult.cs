@@ -96,6 +96,18 @@ public sealed class MotorResult(MotorNode motor)
     /// <summary>A fire pump's voltage at starting and running (695.7), from the source through its feeders and branch.</summary>
     public Result<FirePumpVoltage>? FirePumpVoltage { get; internal set; }
 
+    /// <summary>Written as a 'compressor': sized to Article 440 (FullLoadCurrent is then its RLA or selection current).</summary>
+    public bool IsCompressor { get; internal set; }
+
+    /// <summary>What a motor-compressor's nameplate is marked with, as written (Article 440).</summary>
+    public CompressorMarking? Compressor { get; internal set; }
+
+    /// <summary>
+    /// Marked equipment's loads other than its largest motor-compressor, as its feeder counts them:
+    /// the marked minimum circuit ampacity less 125 % of that compressor's current (440.33; docs/checks.md).
+    /// </summary>
+    public decimal? EquipmentOtherLoads { get; internal set; }
+
     /// <summary>The current this motor adds to its feeder under 430.24 (its duty-cycle current when it has one).</summary>
     public decimal? DutyCycleAmps { get; internal set; }
 }

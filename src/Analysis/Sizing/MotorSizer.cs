@@ -33,6 +33,8 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
     public MotorResult Size(MotorNode motor)
     {
         var r = new MotorResult(motor);
+        if (motor.IsCompressor) return SizeCompressor(motor, r);
+        WarnCompressorOnly(motor);
         var feeder = motor.Feeder;
         if (motor.Power is not { } power || feeder.Voltage is not { } systemVolts || feeder.Phases is not { } systemPhases) return r;
 
@@ -408,7 +410,8 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
     private static string Describe(Quantity motor, decimal horsepower) =>
         motor.Unit == Unit.Kw ? $"{Quantity.Number(motor.Value)} kW (sized as {Numbers.Horsepower(horsepower)} hp)" : $"{Numbers.Horsepower(horsepower)} hp";
 
-    private void CheckGround(MotorNode motor, MotorResult r, decimal flc, Phases phases, MotorKind kind, DesignLetter? design, Efficiency efficiency, Settings settings)
+    private void CheckGround(MotorNode motor, MotorResult r, decimal flc, Phases phases, MotorKind kind, DesignLetter? design, Efficiency efficiency, Settings settings,
+        string rule = "NEC 250.122(D)(1)")
     {
         var material = settings.Material;
         var phaseMinimum = r.MinimumWire?.Value;
@@ -420,7 +423,7 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         if (r.Device == ProtectiveDevice.InstantaneousTripBreaker)
             r.MinimumGround = cache.GroundForInstantaneousTrip(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency), material, phase, phaseMinimum);
         else if ((r.ProtectionRating ?? r.MaximumProtection?.Value ?? r.FirePumpMinimumProtection?.Value) is { } device)
-            r.MinimumGround = cache.Ground(device, material, phase, phaseMinimum, "NEC 250.122(D)(1)");
+            r.MinimumGround = cache.Ground(device, material, phase, phaseMinimum, rule);
         var ground = Get(motor, m => m.Ground, out var owner);
         if (r.MinimumGround?.Value is not { } min)
         {

@@ -149,11 +149,14 @@ public sealed class FeederNode(Statement header, ProjectNode? project) : Circuit
 
 public sealed class MotorNode(Statement header, FeederNode feeder) : CircuitNode(header, feeder)
 {
-    public override string Keyword => "motor";
+    /// <summary>'motor', or 'compressor' for a hermetic refrigerant motor-compressor (Article 440).</summary>
+    public override string Keyword => Header.Keyword;
+    /// <summary>Written as a 'compressor': sized to Article 440 from its marked currents, not from horsepower.</summary>
+    public bool IsCompressor => Header.Keyword == "compressor";
     public FeederNode Feeder => feeder;
     public Located<Quantity>? Power => Get<Quantity>("motor", "power");
-    public Located<Quantity>? RatedVoltage => Get<Quantity>("motor", "voltage");
-    public Located<Phases>? Phases => Get<Phases>("motor", "phases");
+    public Located<Quantity>? RatedVoltage => Get<Quantity>(Keyword, "voltage");
+    public Located<Phases>? Phases => Get<Phases>(Keyword, "phases");
     public Located<Quantity>? Nameplate => Get<Quantity>("nameplate", "current");
     public Located<decimal>? ServiceFactor => Get<decimal>("service-factor", "value");
     public Located<Quantity>? TemperatureRise => Get<Quantity>("temp-rise", "temperature");
@@ -189,6 +192,14 @@ public sealed class MotorNode(Statement header, FeederNode feeder) : CircuitNode
     public Located<Quantity>? LockedRotorCurrent => Get<Quantity>("locked-rotor", "current");
     public Located<WindingScope>? OverloadWindings => Get<WindingScope>("overload", "windings");
     /// <summary>The drive provides the motor's overload protection (430.124(A)).</summary>
+    /// <summary>A motor-compressor's marked rated-load current (RLA, 440.6(A)).</summary>
+    public Located<Quantity>? RatedLoad => Get<Quantity>("rated-load", "current");
+    /// <summary>A motor-compressor's marked branch-circuit selection current (440.4(C)).</summary>
+    public Located<Quantity>? SelectionCurrent => Get<Quantity>("selection-current", "current");
+    /// <summary>The equipment's marked minimum circuit ampacity (440.4(B)).</summary>
+    public Located<Quantity>? MinimumAmpacity => Get<Quantity>("min-ampacity", "current");
+    /// <summary>The equipment's marked maximum branch short-circuit and ground-fault device rating (440.4(B)).</summary>
+    public Located<Quantity>? MarkedMaximumProtection => Get<Quantity>("max-protection", "current");
     public Located<bool>? DriveOverload => Has("drive-overload") ? new Located<bool>(true, Statement("drive-overload")!.Range) : null;
 }
 

@@ -39,7 +39,7 @@ public static class Disconnects
             Step.Amps("Disconnect ampere rating", amps, "NEC 430.110(C)(2)", $"115 % × summed {Format.Amps(summedFullLoadAmps)}"));
     }
 
-    private static decimal? SmallestHorsepower(CsvTable table, decimal volts, Phases phases, decimal amps)
+    internal static decimal? SmallestHorsepower(CsvTable table, decimal volts, Phases phases, decimal amps)
     {
         if (MotorCurrent.Column(table, volts, phases) is not { } column) return null;
         return table.Rows.Where(r => CsvTable.Number(r[column]) >= amps).Select(r => Numbers.Parse(r[0])).FirstOrDefault();
