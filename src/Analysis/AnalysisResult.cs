@@ -24,7 +24,9 @@ public sealed class AnalysisResult
         Parse = parse;
         _motors = motors;
         Feeders = feeders;
-        Findings = findings.MoveToImmutable();
+        // Acknowledgements are read from the comments on every analysis, full or updated, so an
+        // edit to a directive (which leaves the model as it was) takes effect as well.
+        (Findings, Acknowledged) = Acknowledgements.Apply(parse, findings.MoveToImmutable());
         ParseFindings = parseFindings;
         LikeUsers = likeUsers;
     }
@@ -33,8 +35,11 @@ public sealed class AnalysisResult
     public IReadOnlyDictionary<MotorNode, MotorResult> Motors => _motors;
     public IReadOnlyDictionary<FeederNode, FeederResult> Feeders { get; }
 
-    /// <summary>Syntax diagnostics and sizing findings together, ordered by position.</summary>
+    /// <summary>Syntax diagnostics and sizing findings together, ordered by position; those acknowledged in the list are left out.</summary>
     public ImmutableArray<Finding> Findings { get; }
+
+    /// <summary>Findings the list acknowledges (`# acknowledge CODE: reason`), each with its reason; not in <see cref="Findings"/>.</summary>
+    public ImmutableArray<Acknowledgement> Acknowledged { get; }
 
     public bool HasErrors => Findings.Any(f => f.Severity == Severity.Error);
 
@@ -42,7 +47,7 @@ public sealed class AnalysisResult
     // the parts the edit can have changed.
     internal LayeredMap<MotorNode, MotorResult> MotorTable => _motors;
 
-    /// <summary><see cref="Findings"/> with their ranks, for merging in an update.</summary>
+    /// <summary>Every finding with its rank, before acknowledgements are applied, for merging in an update.</summary>
     internal IReadOnlyList<RankedFinding> Ranked { get; }
 
     /// <summary>The parser's diagnostics as findings, in line order.</summary>
@@ -58,7 +63,11 @@ public sealed class AnalysisResult
 
     internal void KeepCache(SizingCache cache) => _cache = cache.Count <= SizingCache.Limit ? cache : null;
 
-    /// <summary>Every fix at once ("size everything"): edits that do not overlap, joined into one change.</summary>
+    /// <summary>
+    /// Every sizing fix at once ("size everything"): edits that do not overlap, joined into one
+    /// change. A stale acknowledgement's removal is left to its own code action: sizing changes
+    /// values, never the engineer's written reasons.
+    /// </summary>
     public ImmutableArray<TextEdit> SizeEverything() =>
-        EditBuilder.Combine(Findings.Where(f => f.Fix is not null).SelectMany(f => f.Fix!.Edits));
+        EditBuilder.Combine(Findings.Where(f => f.Fix is not null && f.Code != FindingCodes.AcknowledgementStale).SelectMany(f => f.Fix!.Edits));
 }

@@ -30,38 +30,51 @@ public static class CheckCommand
             var all = full.SelectMany(r => r.Findings).ToList();
             var level = result.GetValue(severity);
             var reports = full.Select(r => (r.File, FindingCap.Shown(r.Findings.Where(f => SharedOptions.Shows(level, f.Severity)).ToList()))).ToList();
+            var acknowledged = full.GroupBy(r => r.File).ToDictionary(g => g.Key, g => (IReadOnlyList<Acknowledgement>)g.SelectMany(r => r.Acknowledged).ToList());
             var colored = ColorChoice.Enabled(result.GetValue(color), env);
             switch (result.GetValue(format))
             {
                 case "json":
-                    stdout.WriteLine(JsonReport.Write(reports).ToJsonString(JsonReport.Options));
+                    stdout.WriteLine(JsonReport.Write(reports, acknowledged).ToJsonString(JsonReport.Options));
                     break;
                 case "sarif":
-                    stdout.WriteLine(SarifReport.Write(reports, typeof(CheckCommand).Assembly.GetName().Version?.ToString() ?? "0").ToJsonString(JsonReport.Options));
+                    stdout.WriteLine(SarifReport.Write(reports, typeof(CheckCommand).Assembly.GetName().Version?.ToString() ?? "0", acknowledged).ToJsonString(JsonReport.Options));
                     break;
                 default:
                     foreach (var (file, findings) in reports)
                     {
                         foreach (var f in findings) stdout.WriteLine(FindingText.Line(file, f, colored));
+                        // The justified deviations stay visible to a reviewer, after the findings, unless only the severe are asked for.
+                        if (level == "information")
+                        {
+                            foreach (var a in acknowledged[file]) stdout.WriteLine(FindingText.Line(file, a));
+                        }
                     }
 
                     break;
             }
 
             int errors = all.Count(f => f.Severity == Severity.Error), warnings = all.Count(f => f.Severity == Severity.Warning);
+            var acks = full.Sum(r => r.Acknowledged.Count);
             if (!result.GetValue(quiet))
-                stderr.WriteLine($"{files.Count} file{(files.Count == 1 ? "" : "s")} checked: {errors} error{(errors == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")}");
+                stderr.WriteLine($"{files.Count} file{(files.Count == 1 ? "" : "s")} checked: {errors} error{(errors == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")}"
+                    + (acks > 0 ? $", {acks} acknowledged" : ""));
             return errors > 0 ? ExitCodes.Findings : ExitCodes.Clean;
         });
         return command;
     }
 
     /// <summary>Analyzes each file; with many files on an interactive terminal, shows progress on stderr.</summary>
-    private static List<(string File, IReadOnlyList<Finding> Findings)> Analyze(Inputs inputs, TextWriter stderr, bool quiet)
+    private static List<(string File, IReadOnlyList<Finding> Findings, IReadOnlyList<Acknowledgement> Acknowledged)> Analyze(Inputs inputs, TextWriter stderr, bool quiet)
     {
         var files = inputs.Names;
-        var reports = new List<(string, IReadOnlyList<Finding>)>();
-        void One(string file) => reports.Add((file, Analyzer.Analyze(inputs.Read(file)).Findings));
+        var reports = new List<(string, IReadOnlyList<Finding>, IReadOnlyList<Acknowledgement>)>();
+        void One(string file)
+        {
+            var analysis = Analyzer.Analyze(inputs.Read(file));
+            reports.Add((file, analysis.Findings, analysis.Acknowledged));
+        }
+
         if (quiet || files.Count < 20 || Console.IsErrorRedirected || stderr != Console.Error)
         {
             foreach (var f in files) One(f);

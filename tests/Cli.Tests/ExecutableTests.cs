@@ -13,9 +13,12 @@ public sealed class ExecutableTests : IDisposable
 
     private static string Example(string name) => Path.Combine(Executable.RepoRoot, "examples", name);
 
-    private static void AssertValid(string schemaPath, string json)
+    // A schema is registered globally by its $id when read, and may be read only once per process.
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, Lazy<JsonSchema>> Schemas = new();
+
+    internal static void AssertValid(string schemaPath, string json)
     {
-        var schema = JsonSchema.FromText(File.ReadAllText(schemaPath));
+        var schema = Schemas.GetOrAdd(schemaPath, p => new Lazy<JsonSchema>(() => JsonSchema.FromText(File.ReadAllText(p)))).Value;
         using var doc = JsonDocument.Parse(json);
         var result = schema.Evaluate(doc.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.List, RequireFormatValidation = true });
         Assert.True(result.IsValid, string.Join("\n", (result.Details ?? []).Where(d => d.Errors is not null)

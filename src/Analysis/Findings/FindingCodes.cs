@@ -50,4 +50,13 @@ public static class FindingCodes
     public const string NotWritten = "M301";
     public const string FirePumpListedDevice = "M302";
     public const string NotShown = "M310";
+
+    /// <summary>An acknowledgement (`# acknowledge CODE: reason`) that matches no finding on its line any more.</summary>
+    public const string AcknowledgementStale = "M320";
+
+    /// <summary>An acknowledgement that names no code, or one that does not exist or cannot be acknowledged.</summary>
+    public const string AcknowledgementBadCode = "M321";
+
+    /// <summary>An acknowledgement without a reason: it acknowledges nothing until the reason is written.</summary>
+    public const string AcknowledgementWithoutReason = "M322";
 }

@@ -10,15 +10,34 @@ public static class JsonReport
 {
     public static readonly JsonSerializerOptions Options = new() { WriteIndented = true };
 
-    public static JsonObject Write(IReadOnlyList<(string File, IReadOnlyList<Finding> Findings)> files) => new()
+    /// <summary>The report; <paramref name="acknowledged"/> holds, by file, the findings the lists acknowledge.</summary>
+    public static JsonObject Write(IReadOnlyList<(string File, IReadOnlyList<Finding> Findings)> files,
+        IReadOnlyDictionary<string, IReadOnlyList<Acknowledgement>>? acknowledged = null)
     {
-        ["version"] = 1,
-        ["files"] = new JsonArray(files.Select(f => (JsonNode)new JsonObject
+        IReadOnlyList<Acknowledgement> Of(string file) => acknowledged?.GetValueOrDefault(file) ?? [];
+        var summary = Summary(files.SelectMany(f => f.Findings).ToList());
+        summary["acknowledged"] = files.Sum(f => Of(f.File).Count);
+        return new JsonObject
         {
-            ["path"] = f.File,
-            ["findings"] = new JsonArray(f.Findings.Select(Finding).ToArray()),
-        }).ToArray()),
-        ["summary"] = Summary(files.SelectMany(f => f.Findings).ToList()),
+            ["version"] = 1,
+            ["files"] = new JsonArray(files.Select(f => (JsonNode)new JsonObject
+            {
+                ["path"] = f.File,
+                ["findings"] = new JsonArray(f.Findings.Select(Finding).ToArray()),
+                ["acknowledged"] = new JsonArray(Of(f.File).Select(Acknowledged).ToArray()),
+            }).ToArray()),
+            ["summary"] = summary,
+        };
+    }
+
+    private static JsonNode Acknowledged(Acknowledgement a) => new JsonObject
+    {
+        ["code"] = a.Finding.Code,
+        ["severity"] = FindingText.Name(a.Finding.Severity),
+        ["message"] = a.Finding.Message,
+        ["range"] = Range(a.Finding.Range),
+        ["reason"] = a.Reason,
+        ["directive"] = Range(a.Directive),
     };
 
     private static JsonNode Finding(Finding f) => new JsonObject

@@ -12,9 +12,16 @@ public static class SarifReport
 {
     public const string Schema = "https://json.schemastore.org/sarif-2.1.0.json";
 
-    public static JsonObject Write(IReadOnlyList<(string File, IReadOnlyList<Finding> Findings)> files, string toolVersion)
+    /// <summary>
+    /// The log. Findings the lists acknowledge (<paramref name="acknowledged"/>, by file) are results
+    /// too, each with an in-source suppression whose justification is the written reason, so
+    /// code-scanning tools show them as dismissed with why.
+    /// </summary>
+    public static JsonObject Write(IReadOnlyList<(string File, IReadOnlyList<Finding> Findings)> files, string toolVersion,
+        IReadOnlyDictionary<string, IReadOnlyList<Acknowledgement>>? acknowledged = null)
     {
-        var all = files.SelectMany(f => f.Findings.Select(x => (f.File, Finding: x))).ToList();
+        var all = files.SelectMany(f => f.Findings.Select(x => (f.File, Finding: x, Reason: (string?)null))
+            .Concat((acknowledged?.GetValueOrDefault(f.File) ?? []).Select(a => (f.File, a.Finding, Reason: (string?)a.Reason)))).ToList();
         var rules = all.Select(x => x.Finding.Code).Distinct().Order(StringComparer.Ordinal).ToList();
         return new JsonObject
         {
@@ -36,9 +43,17 @@ public static class SarifReport
                     },
                 },
                 ["columnKind"] = "utf16CodeUnits",
-                ["results"] = new JsonArray(all.Select(x => (JsonNode)Result(x.File, x.Finding, rules.IndexOf(x.Finding.Code))).ToArray()),
+                ["results"] = new JsonArray(all.Select(x => (JsonNode)Result(x.File, x.Finding, rules.IndexOf(x.Finding.Code), x.Reason)).ToArray()),
             }),
         };
+    }
+
+    private static JsonObject Result(string file, Finding f, int ruleIndex, string? acknowledgedBecause)
+    {
+        var result = Result(file, f, ruleIndex);
+        if (acknowledgedBecause is not null)
+            result["suppressions"] = new JsonArray(new JsonObject { ["kind"] = "inSource", ["justification"] = acknowledgedBecause });
+        return result;
     }
 
     private static JsonObject Result(string file, Finding f, int ruleIndex) => new()
