@@ -15,22 +15,40 @@ public static class ScheduleCommand
     public static Command Create(TextWriter stdout, CliEnvironment env)
     {
         var file = new Argument<string>("file") { Description = "A motor-list file" };
-        var format = new Option<string>("--format") { Description = "table, csv, markdown or json", DefaultValueFactory = _ => "table" };
-        format.AcceptOnlyFromAmong("table", "csv", "markdown", "json");
-        var command = new Command("schedule", "Print the motor schedule with computed and specified sizes") { file, format };
+        var format = new Option<string>("--format") { Description = "table, csv, markdown, json or xlsx", DefaultValueFactory = _ => "table" };
+        format.AcceptOnlyFromAmong("table", "csv", "markdown", "json", "xlsx");
+        var table = new Option<string>("--table") { Description = "For csv: the motors table or the feeders table", DefaultValueFactory = _ => "motors" };
+        table.AcceptOnlyFromAmong("motors", "feeders");
+        var output = SharedOptions.Output("the schedule (required for xlsx)");
+        var command = new Command("schedule", "Print the motor schedule with computed and specified sizes") { file, format, table, output };
+        command.Validators.Add(r =>
+        {
+            if (r.GetValue(format) == "xlsx" && r.GetValue(output) is null) r.AddError("--format xlsx writes a workbook: name the file with --output FILE");
+            if (r.GetResult(table) is { Implicit: false } && r.GetValue(format) != "csv") r.AddError("--table applies to --format csv only");
+        });
         command.SetAction(result =>
         {
             var path = result.GetValue(file)!;
             var source = SourceFiles.Expand([path])[0];
             var analysis = Analyzer.Analyze(SourceFiles.Read(source));
-            var schedule = Schedule.Of(analysis);
-            stdout.Write(result.GetValue(format) switch
+            var chosen = result.GetValue(format);
+            var target = result.GetValue(output);
+            if (chosen == "xlsx")
             {
-                "csv" => Csv(schedule),
+                SourceFiles.WriteOutput(target!, ScheduleXlsx.Write(ScheduleDataBuilder.Of(analysis, source)));
+                return analysis.HasErrors ? ExitCodes.Findings : ExitCodes.Clean;
+            }
+
+            var schedule = Schedule.Of(analysis);
+            var text = chosen switch
+            {
+                "csv" => ScheduleCsv.Write(ScheduleDataBuilder.Of(analysis, source), result.GetValue(table)!),
                 "markdown" => Markdown(schedule),
                 "json" => ScheduleJson.Write(ScheduleDataBuilder.Of(analysis, source)),
-                _ => ScheduleTable.Render(schedule, env.OutputIsTerminal ? env.TerminalWidth : null, FeederHeaders, FeederCells),
-            });
+                _ => ScheduleTable.Render(schedule, target is null && env.OutputIsTerminal ? env.TerminalWidth : null, FeederHeaders, FeederCells),
+            };
+            if (target is null) stdout.Write(text);
+            else SourceFiles.WriteOutput(target, System.Text.Encoding.UTF8.GetBytes(text));
             return analysis.HasErrors ? ExitCodes.Findings : ExitCodes.Clean;
         });
         return command;
@@ -41,18 +59,6 @@ public static class ScheduleCommand
 
     private static string[] FeederCells(FeederTotals f) =>
         [f.Tag, f.Volts, f.CalculatedLoad, f.RequiredAmpacity, f.MinimumWire, f.Wire, f.MaximumProtection, f.Protection, f.MinimumGround, f.Ground, f.VoltageDrop];
-
-    public static string Csv(Schedule s)
-    {
-        var sb = new StringBuilder();
-        void Row(IEnumerable<string> cells) => sb.Append(string.Join(",", cells.Select(Quote))).Append('\n');
-        Row(ScheduleRow.Headers);
-        foreach (var r in s.Rows) Row(r.Cells);
-        sb.Append('\n');
-        Row(FeederHeaders);
-        foreach (var f in s.Feeders) Row(FeederCells(f));
-        return sb.ToString();
-    }
 
     public static string Markdown(Schedule s)
     {
@@ -67,7 +73,4 @@ public static class ScheduleCommand
         foreach (var f in s.Feeders) Row(FeederCells(f));
         return sb.ToString();
     }
-
-    private static string Quote(string cell) =>
-        cell.IndexOfAny([',', '"', '\n']) >= 0 ? "\"" + cell.Replace("\"", "\"\"") + "\"" : cell;
 }

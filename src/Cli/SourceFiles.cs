@@ -62,4 +62,17 @@ public static class SourceFiles
             throw new CliException(e.Message);
         }
     }
+
+    /// <summary>Writes an output file (a schedule, a workbook) atomically; a refusal is a message and exit 2.</summary>
+    public static void WriteOutput(string path, byte[] bytes)
+    {
+        try
+        {
+            AtomicWriter.WriteOutput(path, bytes);
+        }
+        catch (FileRefusedException e)
+        {
+            throw new CliException(e.Message);
+        }
+    }
 }

@@ -33,10 +33,22 @@ public static class AtomicWriter
 
     public static void WriteText(string path, string text) => Write(path, Utf8.GetBytes(text));
 
-    public static void Write(string path, ReadOnlySpan<byte> bytes)
+    public static void Write(string path, ReadOnlySpan<byte> bytes) => Write(path, bytes, create: false);
+
+    /// <summary>
+    /// Writes an output file (a schedule, a workbook, a report) by the same rules, except that a file
+    /// that does not exist yet is created (mode 0644: the owner writes, everyone reads, as a new file
+    /// under the usual umask 022 would be).
+    /// </summary>
+    public static void WriteOutput(string path, ReadOnlySpan<byte> bytes) => Write(path, bytes, create: true);
+
+    private static void Write(string path, ReadOnlySpan<byte> bytes, bool create)
     {
         var target = ResolveTarget(path);
-        var status = CheckWritable(path, target);
+        var status = create && !File.Exists(target) && !Directory.Exists(target) && new FileInfo(target).LinkTarget is null
+            ? null
+            : CheckWritable(path, target);
+        var isNew = status is null && !File.Exists(target);
         var folder = Path.GetDirectoryName(target)!;
         var (temp, stream) = CreateTemp(path, folder, target);
         try
@@ -46,6 +58,8 @@ public static class AtomicWriter
                 stream.Write(bytes);
                 AfterTempWritten?.Invoke(temp);
                 if (status is { } s) KeepOwnerAndMode(path, stream.SafeFileHandle, s);
+                else if (isNew && !OperatingSystem.IsWindows())
+                    File.SetUnixFileMode(stream.SafeFileHandle, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.GroupRead | UnixFileMode.OtherRead);
                 stream.Flush(flushToDisk: true);
             }
 

@@ -13,12 +13,10 @@ public sealed class ExecutableTests : IDisposable
 
     private static string Example(string name) => Path.Combine(Executable.RepoRoot, "examples", name);
 
-    // A schema is registered globally by its $id when read, and may be read only once per process.
-    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, Lazy<JsonSchema>> Schemas = new();
-
+    // A schema is registered globally by its $id when read, and may be read only once per process (see Schemas).
     internal static void AssertValid(string schemaPath, string json)
     {
-        var schema = Schemas.GetOrAdd(schemaPath, p => new Lazy<JsonSchema>(() => JsonSchema.FromText(File.ReadAllText(p)))).Value;
+        var schema = Schemas.Load(schemaPath);
         using var doc = JsonDocument.Parse(json);
         var result = schema.Evaluate(doc.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.List, RequireFormatValidation = true });
         Assert.True(result.IsValid, string.Join("\n", (result.Details ?? []).Where(d => d.Errors is not null)
@@ -60,7 +58,7 @@ public sealed class ExecutableTests : IDisposable
     }
 
     [Theory]
-    [InlineData("csv", "Feeder,Tag,Description,Power")]
+    [InlineData("csv", "File,Line,Feeder,Tag,Description,Quantity,Power,Power unit,Volts (V)")]
     [InlineData("markdown", "| Feeder | Tag | Description |")]
     [InlineData("table", "Max protection")]
     [InlineData("json", "\"motors\"")]

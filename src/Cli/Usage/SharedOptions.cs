@@ -8,6 +8,9 @@ public static class SharedOptions
 {
     public static Option<bool> Quiet(string what) => new("--quiet", "-q") { Description = $"Print nothing but {what}" };
 
+    /// <summary>`--output FILE` (`-o`): write the result to FILE (atomically, through src/Files) instead of standard output.</summary>
+    public static Option<string?> Output(string what) => new("--output", "-o") { Description = $"Write {what} to this file instead of standard output" };
+
     /// <summary>`--severity LEVEL`: show findings at LEVEL or more severe. Totals and the exit code still count all of them.</summary>
     public static Option<string> SeverityFilter()
     {
