@@ -78,6 +78,7 @@ public sealed class ScheduleDataFormatTests : IDisposable
     [InlineData("dairy-bottling.motors")]
     [InlineData("cabinet-shop.motors")]
     [InlineData("booster-station.motors")]
+    [InlineData("cold-storage.motors")]
     public void JsonValidatesAgainstItsSchema(string example)
     {
         var json = Json(example);
