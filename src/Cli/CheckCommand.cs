@@ -24,8 +24,8 @@ public static class CheckCommand
         command.SetAction(result =>
         {
             var inputs = Inputs.Resolve(result.GetValue(paths)!, result.GetValue(stdinName), env, stderr);
-            var files = inputs.Names;
             var full = Analyze(inputs, stderr, result.GetValue(quiet));
+            var files = full.Select(r => r.File).ToList();
             // Totals and the exit code count every finding; each file shows at most FindingCap.MaxShown of those the filter keeps.
             var all = full.SelectMany(r => r.Findings).ToList();
             var level = result.GetValue(severity);
@@ -64,15 +64,22 @@ public static class CheckCommand
         return command;
     }
 
-    /// <summary>Analyzes each file; with many files on an interactive terminal, shows progress on stderr.</summary>
+    /// <summary>Analyzes each plant and each file on its own; with many on an interactive terminal, shows progress on stderr.</summary>
     private static List<(string File, IReadOnlyList<Finding> Findings, IReadOnlyList<Acknowledgement> Acknowledged)> Analyze(Inputs inputs, TextWriter stderr, bool quiet)
     {
-        var files = inputs.Names;
+        // Standard input is a list on its own; files that belong to a plant bring in the plant.
+        var files = inputs.FromStdin ? [new Unit(null, inputs.Names[0])] : PlantInputs.Group(inputs.Names);
         var reports = new List<(string, IReadOnlyList<Finding>, IReadOnlyList<Acknowledgement>)>();
-        void One(string file)
+        void One(Unit unit)
         {
-            var analysis = Analyzer.Analyze(inputs.Read(file));
-            reports.Add((file, analysis.Findings, analysis.Acknowledged));
+            if (unit.Plant is not null)
+            {
+                reports.AddRange(PlantInputs.Findings(unit));
+                return;
+            }
+
+            var analysis = Analyzer.Analyze(inputs.Read(unit.File!));
+            reports.Add((unit.File!, analysis.Findings, analysis.Acknowledged));
         }
 
         if (quiet || files.Count < 20 || Console.IsErrorRedirected || stderr != Console.Error)

@@ -14,7 +14,11 @@ public sealed record SearchResult(IReadOnlyList<string> Files, IReadOnlyList<Ski
 /// </summary>
 public static class FileSearch
 {
-    public static SearchResult Find(string root, string extension, bool stayInside, CancellationToken ct = default)
+    public static SearchResult Find(string root, string extension, bool stayInside, CancellationToken ct = default) =>
+        Find(root, extension, stayInside, "a symlink leading out of the workspace", ct);
+
+    /// <summary>The same, naming what a symlink leaving the root leaves (the workspace, a plant's folder).</summary>
+    public static SearchResult Find(string root, string extension, bool stayInside, string outsideReason, CancellationToken ct = default)
     {
         var files = new List<(string Path, (ulong, ulong) Id)>();
         var skipped = new List<Skipped>();
@@ -59,7 +63,7 @@ public static class FileSearch
                 if (s.Kind != FileKind.Directory && !isList) continue;
                 if (stayInside && realRoot is not null && !Inside(RealPath(entry), realRoot))
                 {
-                    skipped.Add(new Skipped(entry, "a symlink leading out of the workspace"));
+                    skipped.Add(new Skipped(entry, outsideReason));
                     continue;
                 }
 

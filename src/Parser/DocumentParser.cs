@@ -26,7 +26,20 @@ public static class DocumentParser
     /// <summary>Documents above this size get one diagnostic instead of a parse (about 128 MB of UTF-16).</summary>
     public const int MaxChars = 64 * 1024 * 1024;
 
-    public static ParseResult Parse(string text)
+    public static ParseResult Parse(string text) => Parse(text, parts: null);
+
+    /// <summary>
+    /// Several documents read as one (the files of a plant): <paramref name="text"/> is their texts
+    /// joined, each starting on a line listed in <paramref name="partStarts"/> (ascending, the first
+    /// 0). Read exactly as <see cref="Parse(string)"/> reads one document, except that a block never
+    /// runs from one part into the next, a merge conflict left open ends with its part, tags must be
+    /// unique across all parts, and a message that points at another line names it with
+    /// <paramref name="lineLabel"/> (which can say which part it is in).
+    /// </summary>
+    public static ParseResult ParseJoined(string text, IReadOnlyList<int> partStarts, Func<int, string> lineLabel) =>
+        Parse(text, new DocumentParts(partStarts, lineLabel));
+
+    private static ParseResult Parse(string text, DocumentParts? parts)
     {
         var diagnostics = new List<Diagnostic>();
         var hasBom = text.Length > 0 && text[0] == '\uFEFF';
@@ -46,8 +59,8 @@ public static class DocumentParser
             return Unreadable(text, hasBom, diagnostics);
         }
 
-        var lines = LineScanner.Scan(text, start, diagnostics);
-        var model = new StructureBuilder(new StatementParser(new ValueReader(), diagnostics), diagnostics).Build(lines);
+        var lines = LineScanner.Scan(text, start, diagnostics, parts);
+        var model = new StructureBuilder(new StatementParser(new ValueReader(), diagnostics), diagnostics, parts).Build(lines);
         var sorted = diagnostics.OrderBy(d => d.Range.Start).ToImmutableArray();
         return new ParseResult(new SyntaxTree(text, hasBom, lines, sorted), model, sorted);
     }

@@ -12,7 +12,7 @@ namespace MotorLang.Parser;
 /// A line that cannot be read opens a "broken" block so that the lines under it are skipped
 /// quietly instead of each reporting that it is misplaced.
 /// </summary>
-internal sealed class StructureBuilder(StatementParser statements, List<Diagnostic> diagnostics)
+internal sealed class StructureBuilder(StatementParser statements, List<Diagnostic> diagnostics, DocumentParts? parts = null)
 {
     private sealed class Block(BlockKind kind, int headerIndent, BlockNode? node, bool broken)
     {
@@ -33,6 +33,13 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
         _stack.Add(new Block(BlockKind.Root, -1, null, false) { ChildIndent = 0 });
         foreach (var line in lines)
         {
+            // Each part of a joined document starts at the top level, whatever the last one left open.
+            if (parts is not null && line.Index > 0 && parts.IsStart(line.Index))
+            {
+                _stack.Clear();
+                _stack.Add(new Block(BlockKind.Root, -1, null, false) { ChildIndent = 0 });
+            }
+
             if (line.InConflict)
             {
                 line.IsBroken = true;
@@ -122,7 +129,7 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
             if (owner.Add(statement) is { } earlier)
             {
                 Error(SyntaxCodes.DuplicateSetting, first.Range,
-                    $"'{spec.Keyword}' is already given on line {earlier.Line.Index + 1}; remove one of them");
+                    $"'{spec.Keyword}' is already given on {LineName(earlier.Line.Index)}; remove one of them");
                 line.IsBroken = true;
             }
         }
@@ -151,7 +158,7 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
                 if (_project is not null)
                 {
                     Error(SyntaxCodes.DuplicateProject, header.KeywordToken.Range,
-                        $"only one project block is allowed; the first is on line {_project.Header.Line.Index + 1}");
+                        $"only one project block is allowed{(parts is null ? "" : " in a plant")}; the first is on {LineName(_project.Header.Line.Index)}");
                     return null;
                 }
 
@@ -182,12 +189,14 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
         if (_byTag.TryGetValue(tag.Value, out var earlier))
         {
             Error(SyntaxCodes.DuplicateTag, tag.Range,
-                $"tag '{tag.Value}' is already used on line {earlier.Header.Line.Index + 1}; tags must be unique in a file");
+                $"tag '{tag.Value}' is already used on {LineName(earlier.Header.Line.Index)}; tags must be unique in a {(parts is null ? "file" : "plant")}");
             return;
         }
 
         _byTag[tag.Value] = node;
     }
+
+    private string LineName(int index) => parts?.LineLabel(index) ?? $"line {index + 1}";
 
     private static string Misplaced(KeywordSpec spec, BlockKind parent)
     {

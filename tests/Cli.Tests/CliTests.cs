@@ -34,6 +34,25 @@ public sealed class CliTests : IDisposable
     }
 
     [Fact]
+    public void CheckOfAnyFileOfAPlantChecksTheWholePlantAndNamesEachFile()
+    {
+        var plant = Path.Combine(_dir, "plant");
+        Directory.CreateDirectory(Path.Combine(plant, "mcc"));
+        File.WriteAllText(Path.Combine(plant, "swbd.motors"), "project \"P\"\n  plant\nfeeder SWBD-1 480V 3ph\n  wire 14 AWG\n");
+        var mcc = Path.Combine(plant, "mcc", "mcc1.motors");
+        // Two 10 hp 460 V motors, 14 A each (NFPA 70-2023 Table 430.250): hand calculation, 430.24,
+        // 1.25 x 14 + 14 = 31.5 A, more than 14 AWG may carry.
+        File.WriteAllText(mcc, "feeder MCC-1 480V 3ph\n  from SWBD-1\n  motor M-1 10hp\n  motor M-2 10hp\n  motor M-1 5hp\n");
+        var (code, output, err) = Run("check", mcc);
+        Assert.Equal(1, code);
+        var lines = output.Trim().Split('\n');
+        Assert.Contains(lines, l => l.StartsWith(Path.Combine(plant, "swbd.motors") + ":4:", StringComparison.Ordinal) && l.Contains("M107"));
+        Assert.Contains(lines, l => l.StartsWith(mcc + ":5:9: error P013", StringComparison.Ordinal) && l.Contains("line 3 of mcc/mcc1.motors"));
+        Assert.DoesNotContain(lines, l => l.Contains("P014"));
+        Assert.Contains("2 files checked", err);
+    }
+
+    [Fact]
     public void CheckOfACleanFileExitsZero()
     {
         // Information findings (sizes not written yet) do not fail a check.

@@ -111,6 +111,9 @@ public abstract class BlockNode
 public sealed class ProjectNode(Statement header) : BlockNode(header, null)
 {
     public Located<string>? Name => Get<string>("project", "name");
+
+    /// <summary>Written 'plant': the project spans every motor list in its file's folder and below (docs/format.md, Plants).</summary>
+    public Statement? Plant => Statement("plant");
 }
 
 /// <summary>Circuit attributes shared by feeders and motors.</summary>

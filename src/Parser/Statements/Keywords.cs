@@ -142,6 +142,8 @@ public static class Keywords
              new("apparent-power", ApparentPower, false, Check: Positive), new("duty", Word, false, LoadDuties)],
             "A non-motor load on the feeder above: its current or kVA, continuous or not."),
 
+        new("plant", [Project], null, [],
+            "This project is a plant: every .motors file in this file's folder and the folders below it is analysed together with it."),
         new("code", [Project, Feeder], null, [new("edition", Word, true, Editions)], "The code edition the file is checked against."),
         new("ambient", Settings, null, [new("temperature", Temperature, true)], "Ambient temperature for conductor correction (Table 310.15(B)(1)(1))."),
         new("conductor", Settings, null,

@@ -11,7 +11,7 @@ namespace MotorLang.Parser.Syntax;
 /// </summary>
 internal static class LineScanner
 {
-    public static LineList Scan(string text, int start, List<Diagnostic> diagnostics)
+    public static LineList Scan(string text, int start, List<Diagnostic> diagnostics, DocumentParts? parts = null)
     {
         var lines = new LineList.Builder();
         SyntaxLine? last = null;
@@ -45,6 +45,8 @@ internal static class LineScanner
             }
 
             var content = text.AsSpan(offset, contentEnd - offset);
+            // A conflict left open in one part of a joined document ends with that part.
+            if (parts is not null && parts.IsStart(index)) conflictOpen = false;
             var inConflict = TrackConflict(content, index, ref conflictOpen, diagnostics);
             lines.Add(last = ScanLine(text, index, offset, content, ending, inConflict, diagnostics, pool, tokens));
             index++;
