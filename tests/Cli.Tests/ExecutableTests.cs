@@ -71,6 +71,20 @@ public sealed class ExecutableTests : IDisposable
     }
 
     [Fact]
+    public void ScheduleJsonOfCompressorsMatchesItsSchema()
+    {
+        var (code, json, _) = Executable.Run(_dir, "schedule", "--format", "json", Example("cold-storage.motors"));
+        Assert.Equal(0, code);
+        AssertValid(Path.Combine(Executable.RepoRoot, "docs", "schemas", "schedule.schema.json"), json);
+        var rtu = JsonNode.Parse(json)!["motors"]!.AsArray().Single(r => (string)r!["tag"]! == "RTU-1")!;
+        Assert.Equal("compressor", (string)rtu["kind"]!);
+        Assert.Equal(50m, (decimal)rtu["markedMaximumProtection"]!["value"]!);
+        // NFPA 70-2023 440.4(B): the marked maximum is the maximum protection of marked equipment.
+        Assert.Equal(50m, (decimal)rtu["maximumProtection"]!["value"]!);
+        Assert.Contains(rtu["rulesApplied"]!.AsArray(), r => (string)r!["rule"]! == "440.12(A)(2)");
+    }
+
+    [Fact]
     public void ScheduleJsonMatchesItsSchemaAndSaysWhatIsNotChecked()
     {
         var (code, json, _) = Executable.Run(_dir, "schedule", "--format", "json", Example("dairy-bottling.motors"));

@@ -36,8 +36,20 @@ public sealed record MotorData
     public string Description { get; init; } = "";
     /// <summary>How many identical motors the row stands for (<c>quantity</c>).</summary>
     public int Quantity { get; init; } = 1;
-    /// <summary>Rated power as written (hp or kW).</summary>
+    /// <summary>"motor" (sized under Article 430) or "compressor" (a motor-compressor or marked equipment, Article 440).</summary>
+    public string Kind { get; init; } = "motor";
+    /// <summary>Rated power as written (hp or kW); null for a compressor.</summary>
     public Measure? Power { get; init; }
+    /// <summary>A compressor's marked rated-load current (RLA), as written.</summary>
+    public Measure? RatedLoadCurrent { get; init; }
+    /// <summary>A compressor's marked branch-circuit selection current, as written.</summary>
+    public Measure? SelectionCurrent { get; init; }
+    /// <summary>Marked locked-rotor current, as written.</summary>
+    public Measure? LockedRotorCurrent { get; init; }
+    /// <summary>Marked equipment's minimum circuit ampacity (440.4(B)), as written.</summary>
+    public Measure? MinimumCircuitAmpacity { get; init; }
+    /// <summary>Marked equipment's maximum short-circuit and ground-fault device (440.4(B)), as written.</summary>
+    public Measure? MarkedMaximumProtection { get; init; }
     /// <summary>System voltage the motor is sized at.</summary>
     public Measure? Volts { get; init; }
     /// <summary>Nameplate (rated) voltage.</summary>
