@@ -10,7 +10,23 @@ public enum DesignLetter { A, B, C, D }
 /// <summary>Design B premium efficiency / energy-efficient motors get the 1100 % instantaneous-trip column.</summary>
 public enum Efficiency { Standard, Premium }
 
-public enum ProtectiveDevice { NonTimeDelayFuse, DualElementFuse, InstantaneousTripBreaker, InverseTimeBreaker }
+/// <summary>
+/// Branch short-circuit and ground-fault devices. The first four are the columns of Table
+/// 430.52(C)(1); the others are the devices 430.52(C)(5)-(7) permit in lieu of them.
+/// </summary>
+public enum ProtectiveDevice
+{
+    NonTimeDelayFuse,
+    DualElementFuse,
+    InstantaneousTripBreaker,
+    InverseTimeBreaker,
+    /// <summary>430.52(C)(7): part of a listed combination motor controller; a setting, at most 1300 % (1700 %).</summary>
+    MotorShortCircuitProtector,
+    /// <summary>430.52(C)(6): a listed self-protected combination controller; instantaneous setting at most 1300 % (1700 %).</summary>
+    SelfProtectedController,
+    /// <summary>430.52(C)(5): fuses for the power electronic devices of a solid-state controller, rated as marked beside them.</summary>
+    SemiconductorFuse,
+}
 
 public enum DutyKind { Continuous, ShortTime, Intermittent, Periodic, Varying }
 

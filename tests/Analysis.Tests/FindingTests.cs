@@ -210,7 +210,7 @@ public class FindingTests
     {
         var lines = Base.ToList();
         lines[3] = feederProtection;
-        lines[10] = "    protection instantaneous-trip-breaker 100A";
+        lines[10] = "    protection instantaneous-trip-breaker 100A listed-combination";
         // No feeder wire: the written 8 AWG carries more than 430.24 needs, and 430.62(B) would then allow up to its ampacity.
         lines.RemoveAt(1);
         var a = Analyzer.Analyze(Text([.. lines]));

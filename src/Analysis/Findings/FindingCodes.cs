@@ -4,7 +4,7 @@ namespace MotorLang.Analysis.Findings;
 /// Stable codes for sizing findings, documented in docs/checks.md. Never renumber. M1xx are
 /// errors against a code rule, M2xx warnings, M3xx information (values not written yet).
 /// </summary>
-public static class FindingCodes
+public static partial class FindingCodes
 {
     public const string WireUndersized = "M101";
     public const string ProtectionTooLarge = "M102";

@@ -94,14 +94,18 @@ public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<Fee
 
     private static string Protection(MotorResult m) =>
         m.FirePumpMinimumProtection?.Value is { } min ? $"≥ {Format.Amps(min)} {Short(m.Device)}" :
-        m.MaximumProtection?.Value is { } max ? $"{Format.Amps(m.Device == ProtectiveDevice.InstantaneousTripBreaker ? decimal.Floor(max) : max)} {Short(m.Device)}" : "";
+        m.MaximumProtection?.Value is { } max ? $"{Format.Amps(ShortCircuitProtection.IsSetting(m.Device) ? decimal.Floor(max) : max)} {Short(m.Device)}" : "";
 
     private static string Short(ProtectiveDevice d) => d switch
     {
         ProtectiveDevice.InverseTimeBreaker => "ITB",
         ProtectiveDevice.InstantaneousTripBreaker => "inst.",
         ProtectiveDevice.DualElementFuse => "DE fuse",
-        _ => "NTD fuse",
+        ProtectiveDevice.NonTimeDelayFuse => "NTD fuse",
+        ProtectiveDevice.MotorShortCircuitProtector => "MSCP",
+        ProtectiveDevice.SelfProtectedController => "self-prot.",
+        ProtectiveDevice.SemiconductorFuse => "semi. fuse",
+        _ => d.ToString(),
     };
 
     private static string Amps(Result<decimal>? r) => r?.Value is { } v ? Format.Amps(v) : "";

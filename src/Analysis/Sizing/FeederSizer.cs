@@ -80,15 +80,15 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
         r.CalculatedLoad = feederMotors.Sum(m => m.FullLoadAmps * m.Quantity) + loads.Sum(l => l.Amps) + equipmentLoads.Sum(l => l.Amps);
         r.RequiredAmpacity = WithCompressors(Feeders.RequiredAmpacity(feederMotors, [.. loads, .. equipmentLoads]), motorResults, "NEC 440.33",
             "counted as motors at the rated-load or branch-circuit selection current, the larger; marked equipment's other loads are its minimum circuit ampacity less 125 % of that current");
-        var fuse = device is ProtectiveDevice.DualElementFuse or ProtectiveDevice.NonTimeDelayFuse;
+        var fuse = ShortCircuitProtection.IsFuse(device);
         var parts = FirePumpParts(supplied, motorResults, r.Volts, r.Phases);
         r.SuppliesFirePump = parts.Any(p => p.Role == FireServiceRole.FirePump);
         var governedBy695 = r.SuppliesFirePump && FirePumpAmpacity(r, parts);
         if (r.SuppliesFirePump)
             r.FirePumpMinimumProtection = FirePump.MinimumDevice(parts, fuse);
         else
-            r.MaximumProtection = device == ProtectiveDevice.InstantaneousTripBreaker
-                ? Result<decimal>.Missing("an instantaneous-trip breaker is not a feeder protective device MotorLang can size (430.52(C)(3) permits one only in a listed combination motor controller on a motor branch circuit)")
+            r.MaximumProtection = !ShortCircuitProtection.IsTableDevice(device) || device == ProtectiveDevice.InstantaneousTripBreaker
+                ? Result<decimal>.Missing(NotAFeederDevice(device))
                 : WithCompressors(Feeders.MaximumProtection(feederMotors, loads, fuse), motorResults, "NEC 430.62(A), 440.22",
                     "a motor-compressor's branch device counts at its 440.22 maximum (under the marked maximum); marked equipment's other loads are left out, the lower limit");
         r.ProtectionRating = feeder.ProtectionRating?.Value.Value;
@@ -113,10 +113,18 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
     /// A motor as the feeder sees it. An instantaneous-trip branch breaker counts at the rating 430.62(A)
     /// Exception No. 1 assumes for the feeder's device type, never at its instantaneous setting.
     /// </summary>
+    /// <remarks>
+    /// Exception No. 1 names instantaneous-trip breakers and motor short-circuit protectors. A
+    /// self-protected combination controller or semiconductor fuses are counted the same way: their
+    /// setting or marked rating is not a 430.52 maximum, and the table percentage is the smaller
+    /// figure, so the feeder limit is never larger for it (the conservative reading).
+    /// </remarks>
     private static FeederMotor AsFeederMotor(MotorResult m, ProtectiveDevice feederDevice)
     {
         var flc = m.FullLoadCurrent.Value!.Value;
-        if (m.Device == ProtectiveDevice.InstantaneousTripBreaker && m.ProtectionBasis is { } basis && feederDevice != ProtectiveDevice.InstantaneousTripBreaker)
+        var assumed = m.Device is ProtectiveDevice.InstantaneousTripBreaker or ProtectiveDevice.MotorShortCircuitProtector
+            or ProtectiveDevice.SelfProtectedController or ProtectiveDevice.SemiconductorFuse;
+        if (assumed && m.ProtectionBasis is { } basis && ShortCircuitProtection.IsTableDevice(feederDevice) && feederDevice != ProtectiveDevice.InstantaneousTripBreaker)
         {
             var (amps, why) = Feeders.AssumedInstantaneousTrip(basis, feederDevice);
             return new FeederMotor(m.Tag, flc, amps, m.Quantity, m.DutyCycleAmps, why);
@@ -274,7 +282,7 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
     {
         if (r.MaximumProtection?.Value is not { } max)
         {
-            if (feeder.Protection?.Value == ProtectiveDevice.InstantaneousTripBreaker)
+            if (feeder.Protection?.Value is { } written && (written == ProtectiveDevice.InstantaneousTripBreaker || !ShortCircuitProtection.IsTableDevice(written)))
                 Add(FindingCodes.FeederDeviceNotSized, Severity.Warning, feeder.Protection.Range,
                     $"feeder protection is not checked: {r.MaximumProtection?.Unavailable}");
             else if (r.MaximumProtection is { Unavailable: { } why } && r.RequiredAmpacity?.Value > 0) // an empty feeder has nothing to protect
@@ -378,4 +386,12 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
 
     private void Add(string code, Severity severity, SourceRange range, string message, Fix? fix = null) =>
         findings.Add(new Finding(code, severity, range, message, fix));
+
+    /// <summary>Why a feeder device of this type gets no 430.62 limit.</summary>
+    private static string NotAFeederDevice(ProtectiveDevice device) => device switch
+    {
+        ProtectiveDevice.InstantaneousTripBreaker =>
+            "an instantaneous-trip breaker is not a feeder protective device MotorLang can size (430.52(C)(3) permits one only in a listed combination motor controller on a motor branch circuit)",
+        _ => $"a {ShortCircuitProtection.DeviceName(device)} is a motor branch device (430.52(C)(5)-(7)), not a feeder protective device MotorLang can size under 430.62",
+    };
 }

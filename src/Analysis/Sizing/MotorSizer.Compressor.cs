@@ -177,6 +177,15 @@ internal sealed partial class MotorSizer
             return;
         }
 
+        if (!ShortCircuitProtection.IsTableDevice(r.Device))
+        {
+            // A motor short-circuit protector, self-protected controller or semiconductor fuse: 440.22 gives no limit for one.
+            r.DeviceUnknown = true;
+            Add(FindingCodes.OutsideScope, Severity.Warning, RangeOn(motor, deviceOwner, device!.Range),
+                $"a {ShortCircuitProtection.DeviceName(r.Device)} on a motor-compressor is not sized by MotorLang (440.22(A) gives no limit for one): its maximum and the grounding conductor are not checked");
+            return;
+        }
+
         var fuse = r.Device is ProtectiveDevice.DualElementFuse or ProtectiveDevice.NonTimeDelayFuse;
         r.ProtectionRating = rating?.Value.Value;
         r.MaximumProtection = MotorCompressors.MaximumProtection(marking, design, _likes.Has(motor, static m => m.HardStart), fuse);

@@ -82,7 +82,7 @@ internal sealed partial class MotorSizer
     /// <summary>The fire pump's minimum device: a standard rating, or for an instantaneous-trip breaker a setting.</summary>
     private decimal? FirePumpMinimum(MotorResult r, decimal lrc, decimal flc)
     {
-        if (r.Device == ProtectiveDevice.InstantaneousTripBreaker)
+        if (ShortCircuitProtection.IsSetting(r.Device))
         {
             var setting = decimal.Ceiling(lrc);
             r.FirePumpMinimumProtection = Result<decimal>.Of(setting, [.. r.FirePumpLockedRotor!.Steps,
@@ -90,7 +90,7 @@ internal sealed partial class MotorSizer
         }
         else
         {
-            var fuse = r.Device is ProtectiveDevice.DualElementFuse or ProtectiveDevice.NonTimeDelayFuse;
+            var fuse = ShortCircuitProtection.IsFuse(r.Device);
             var min = FirePump.MinimumDevice([new FirePumpPart(r.Tag, FireServiceRole.FirePump, flc, lrc)], fuse);
             r.FirePumpMinimumProtection = new Result<decimal>(min.Value, [.. r.FirePumpLockedRotor!.Steps, .. min.Steps], min.Unavailable);
         }

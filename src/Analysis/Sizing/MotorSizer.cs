@@ -253,9 +253,12 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         r.Device = device?.Value ?? ProtectiveDevice.InverseTimeBreaker;
         r.ProtectionRating = rating?.Value.Value;
         var hardStart = _likes.Has(motor, static m => m.HardStart);
-        r.ProtectionBasis = new ProtectionInput(flc, r.Device, phases, kind, design, efficiency, hardStart);
+        var classCc = ClassCcFuse(motor, r.Device);
+        r.ProtectionBasis = new ProtectionInput(flc, r.Device, phases, kind, design, efficiency, hardStart, classCc);
         var input = r.ProtectionBasis.Value;
         r.MaximumProtection = cache.MaximumProtection(input);
+        // 430.52(C)(3), (C)(7), (C)(5): devices permitted only in a listed combination, or rated as marked.
+        if (!DeviceInLieuPermitted(motor, r, device, deviceOwner, rating)) return;
         // 430.4: a part-winding motor's devices are limited per winding unless the list says one protects both (the stricter reading when not said).
         var windings = starting == StartingMethod.PartWinding ? Get(motor, m => m.ProtectionWindings)?.Value ?? WindingScope.PerWinding : (WindingScope?)null;
         if (windings is { } scope) r.MaximumProtection = PartWinding.MaximumProtection(r.MaximumProtection, input, scope);
@@ -267,9 +270,9 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
             return;
         }
         var deviceName = ShortCircuitProtection.DeviceName(r.Device);
-        var unit = r.Device == ProtectiveDevice.InstantaneousTripBreaker ? "setting" : "rating";
+        var unit = ShortCircuitProtection.IsSetting(r.Device) ? "setting" : "rating";
         // Written only when a finding needs it: most motors are correct, and this runs for each.
-        string MaxText() => r.Device == ProtectiveDevice.InstantaneousTripBreaker ? Format.Number(decimal.Floor(max)) + "A" : Format.Number(max) + "A";
+        string MaxText() => ShortCircuitProtection.IsSetting(r.Device) ? Format.Number(decimal.Floor(max)) + "A" : Format.Number(max) + "A";
 
         if (device is null)
         {
@@ -291,9 +294,9 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         var value = rating.Value.Value;
         if (value > max)
         {
-            var rule = windings is not null ? "NEC 430.4" : hardStart ? "NEC 430.52(C)(1)(b)" : "NEC 430.52(C)(1)";
+            var rule = windings is not null ? "NEC 430.4" : MaximumRule(r.Device, hardStart);
             Add(windings is null ? FindingCodes.ProtectionTooLarge : FindingCodes.PartWindingProtectionTooLarge, Severity.Error, RangeOn(motor, ratingOwner, rating.Range),
-                $"{deviceName} {unit} {Format.Amps(value)} is above the {Format.Amps(max)} that {rule} allows for {Format.Amps(flc)} full-load current",
+                $"{deviceName} {unit} {Format.Amps(value)} is above the {Format.Amps(max)} that {rule} allows for {Format.Amps(flc)} full-load current{SmallMotorCombinationNote(r.Device, flc)}",
                 ReplaceOrOverride(motor, ratingOwner, "protection", "rating", MaxText(), $"Change the {unit} to {MaxText()}",
                     overrideText: $"protection {Keywords.Devices.First(d => Equals(d.Value, r.Device)).Canonical} {MaxText()}{windingWord}"));
         }
@@ -420,7 +423,7 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         // minimum: the grounding conductor is sized for that corrected wire, so check and size give
         // the same number (and 250.122(A) never caps it at a wire that has to be replaced).
         var phase = WireToBeReplaced(r) && phaseMinimum is { } corrected ? corrected : r.Wire ?? phaseMinimum;
-        if (r.Device == ProtectiveDevice.InstantaneousTripBreaker)
+        if (r.Device is ProtectiveDevice.InstantaneousTripBreaker or ProtectiveDevice.MotorShortCircuitProtector)
             r.MinimumGround = cache.GroundForInstantaneousTrip(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency), material, phase, phaseMinimum);
         else if ((r.ProtectionRating ?? r.MaximumProtection?.Value ?? r.FirePumpMinimumProtection?.Value) is { } device)
             r.MinimumGround = cache.Ground(device, material, phase, phaseMinimum, rule);

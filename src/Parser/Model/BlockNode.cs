@@ -131,6 +131,10 @@ public abstract class CircuitNode(Statement header, BlockNode? parent) : BlockNo
     /// <summary>The protective device is stated to be listed for fire pump service.</summary>
     public Located<bool>? ProtectionListed => Get<bool>("protection", "listing");
     public Located<WindingScope>? ProtectionWindings => Get<WindingScope>("protection", "windings");
+    /// <summary>The device is stated to be part of a listed combination motor controller.</summary>
+    public Located<bool>? ProtectionCombination => Get<bool>("protection", "combination");
+    /// <summary>The fuse is stated to be Class CC.</summary>
+    public Located<bool>? ProtectionClassCc => Get<bool>("protection", "class");
 }
 
 public sealed class FeederNode(Statement header, ProjectNode? project) : CircuitNode(header, project)

@@ -45,6 +45,24 @@ public static class Keywords
         new("instantaneous-trip-breaker", ProtectiveDevice.InstantaneousTripBreaker, "instantaneous-trip circuit breaker (motor circuit protector)"),
         new("dual-element-fuse", ProtectiveDevice.DualElementFuse, "dual-element (time-delay) fuse", "time-delay-fuse"),
         new("non-time-delay-fuse", ProtectiveDevice.NonTimeDelayFuse, "non-time-delay fuse"),
+        new("motor-short-circuit-protector", ProtectiveDevice.MotorShortCircuitProtector,
+            "motor short-circuit protector, part of a listed combination motor controller (430.52(C)(7))"),
+        new("self-protected-controller", ProtectiveDevice.SelfProtectedController,
+            "listed self-protected combination controller (430.52(C)(6))"),
+        new("semiconductor-fuse", ProtectiveDevice.SemiconductorFuse,
+            "fuses for the power electronic devices of a solid-state controller or drive, rated as marked beside them (430.52(C)(5))"),
+    ];
+
+    /// <summary>A word of our own on a protection line: the device is part of a listed combination motor controller.</summary>
+    public static readonly WordChoice[] Combinations =
+    [
+        new("listed-combination", true, "part of a listed combination motor controller (430.52(C)(3), (C)(7))"),
+    ];
+
+    /// <summary>Fuse classes the code treats apart (the Table 430.52(C)(1) note: time-delay Class CC fuses take the non-time-delay column).</summary>
+    public static readonly WordChoice[] FuseClasses =
+    [
+        new("class-cc", true, "a Class CC fuse: a time-delay one is sized by the non-time-delay column (Table 430.52(C)(1) note 1, 430.52(C)(1)(b)(1))"),
     ];
 
     public static readonly WordChoice[] MotorKinds =
@@ -166,8 +184,9 @@ public static class Keywords
             "Raceway trade size as installed, for the conduit-fill check (Chapter 9 Table 4)."),
         new("protection", [Feeder, Motor], null,
             [new("device", Word, true, Devices), new("rating", Current, false, Check: Positive),
-             new("listing", Word, false, DeviceListings), new("windings", Word, false, WindingScopes)],
-            "Short-circuit and ground-fault protective device and its rating; optionally fire-pump-listed, and per-winding or both-windings."),
+             new("listing", Word, false, DeviceListings), new("windings", Word, false, WindingScopes),
+             new("combination", Word, false, Combinations), new("class", Word, false, FuseClasses)],
+            "Short-circuit and ground-fault protective device and its rating; optionally fire-pump-listed, per-winding or both-windings, listed-combination, class-cc."),
 
         new("nameplate", [Motor], null, [new("current", Current, true, Check: Positive)], "Nameplate full-load amperes (FLA), used for overloads."),
         new("service-factor", [Motor], null,

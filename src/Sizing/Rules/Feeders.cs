@@ -126,7 +126,7 @@ public static class Feeders
         var (row, _) = ShortCircuitProtection.Row(branch);
         var percent = ShortCircuitProtection.Percent(row, feederDevice);
         var amps = branch.FullLoadAmps * percent / 100m;
-        return (amps, $"instantaneous-trip breaker assumed at {Format.Percent(percent)} × {Format.Amps(branch.FullLoadAmps)} (Table 430.52(C)(1), {ShortCircuitProtection.DeviceName(feederDevice)} column)");
+        return (amps, $"{ShortCircuitProtection.DeviceName(branch.Device)} assumed at {Format.Percent(percent)} × {Format.Amps(branch.FullLoadAmps)} (Table 430.52(C)(1), {ShortCircuitProtection.DeviceName(feederDevice)} column)");
     }
 
     /// <summary>One unit per motor: a line of several identical motors counts each (as distinct objects, so one can be "the largest").</summary>

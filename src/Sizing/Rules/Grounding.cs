@@ -55,10 +55,10 @@ public static class Grounding
         return new Result<ConductorSize>(size, [.. steps]);
     }
 
-    /// <summary>250.122(D)(2): for an instantaneous-trip breaker, size from the dual-element fuse the table would allow.</summary>
+    /// <summary>250.122(D)(2): for an instantaneous-trip breaker or a motor short-circuit protector, size from the dual-element fuse the table would allow.</summary>
     public static Result<ConductorSize> ForInstantaneousTrip(ProtectionInput p, ConductorMaterial material, WireSpec? phase = null, WireSpec? phaseMinimum = null)
     {
-        var fuse = ShortCircuitProtection.Maximum(p with { Device = ProtectiveDevice.DualElementFuse, HardStart = false });
+        var fuse = ShortCircuitProtection.Maximum(p with { Device = ProtectiveDevice.DualElementFuse, HardStart = false, ClassCc = false });
         if (fuse.Value is not { } amps) return Result<ConductorSize>.Missing(fuse.Unavailable ?? "no fuse rating");
         return Minimum(amps, material, phase, phaseMinimum, "NEC 250.122(D)(2): the dual-element fuse rating 430.52(C)(1) would allow");
     }

@@ -14,12 +14,12 @@ public static class PartWinding
     public static Result<decimal> MaximumProtection(Result<decimal> full, ProtectionInput p, WindingScope scope)
     {
         if (full.Value is not { } max) return full;
-        var fuse = p.Device is ProtectiveDevice.DualElementFuse or ProtectiveDevice.NonTimeDelayFuse;
+        var fuse = ShortCircuitProtection.IsFuse(p.Device);
         var steps = full.Steps.ToList();
         if (scope == WindingScope.PerWinding)
         {
             var half = max / 2m;
-            if (p.Device == ProtectiveDevice.InstantaneousTripBreaker)
+            if (ShortCircuitProtection.IsSetting(p.Device))
             {
                 steps.Add(Step.Amps("Maximum setting for each winding", half, "NEC 430.4", $"one half of {Format.Amps(max)}"));
                 return new Result<decimal>(half, [.. steps]);

@@ -11,7 +11,8 @@ public readonly record struct ProtectionInput(
     MotorKind Kind = MotorKind.Induction,
     DesignLetter? Design = null,
     Efficiency Efficiency = Efficiency.Standard,
-    bool HardStart = false);
+    bool HardStart = false,
+    bool ClassCc = false);
 
 /// <summary>
 /// Motor branch-circuit short-circuit and ground-fault protection, 430.52. The limits are far
@@ -23,11 +24,16 @@ public static class ShortCircuitProtection
     /// <summary>The largest rating (or, for an instantaneous-trip breaker, setting) the code permits.</summary>
     public static Result<decimal> Maximum(ProtectionInput p)
     {
+        if (!IsTableDevice(p.Device)) return DevicesInLieu.Maximum(p);
         var steps = new List<Step>();
         var (row, rowName) = Row(p);
-        var percent = Percent(row, p.Device);
-        var fuse = p.Device is ProtectiveDevice.NonTimeDelayFuse or ProtectiveDevice.DualElementFuse;
-        steps.Add(new Step("Table percentage", Format.Percent(percent), "NEC Table 430.52(C)(1)", $"{rowName}, {DeviceName(p.Device)}"));
+        // Table 430.52(C)(1) note 1: the non-time-delay column applies to time-delay Class CC fuses.
+        var classCc = p.ClassCc && p.Device == ProtectiveDevice.DualElementFuse;
+        var percent = Percent(row, classCc ? ProtectiveDevice.NonTimeDelayFuse : p.Device);
+        var fuse = IsFuse(p.Device);
+        steps.Add(classCc
+            ? new Step("Table percentage", Format.Percent(percent), "NEC Table 430.52(C)(1), note 1", $"{rowName}, time-delay Class CC fuse: the non-time-delay fuse column applies")
+            : new Step("Table percentage", Format.Percent(percent), "NEC Table 430.52(C)(1)", $"{rowName}, {DeviceName(p.Device)}"));
         var raw = p.FullLoadAmps * percent / 100m;
         steps.Add(Step.Amps("Calculated limit", raw, "NEC 430.52(C)(1)", $"{Format.Amps(p.FullLoadAmps)} × {Format.Percent(percent)}"));
 
@@ -125,26 +131,41 @@ public static class ShortCircuitProtection
 
     /// <summary>430.52(C)(1)(b): the maximums where the table rating will not carry the starting current.</summary>
     /// <remarks>
-    /// A time-delay Class CC fuse may also go to 400 % ((b)(2)); MotorLang does not know a fuse's
-    /// class, so every dual-element fuse gets the 225 % (the conservative reading).
+    /// A time-delay Class CC fuse may go to 400 % with the non-time-delay fuses ((b)(1)) where the
+    /// list says `class-cc`; any other time-delay fuse gets 225 % ((b)(2)).
     /// </remarks>
     private static (decimal Percent, string Rule, string Note) HardStartPercent(ProtectionInput p) => p.Device switch
     {
+        ProtectiveDevice.DualElementFuse when p.ClassCc => (400m, "NEC 430.52(C)(1)(b)(1)", "time-delay Class CC fuse"),
         ProtectiveDevice.NonTimeDelayFuse when p.FullLoadAmps * 4 > 600 =>
             (300m, "NEC 430.52(C)(1)(b)(4)", "above 600 A only fuses of the 601-6000 A class may be used, at 300 %"),
         ProtectiveDevice.NonTimeDelayFuse => (400m, "NEC 430.52(C)(1)(b)(1)", "non-time-delay fuse not exceeding 600 A"),
         ProtectiveDevice.DualElementFuse => (225m, "NEC 430.52(C)(1)(b)(2)",
-            "time-delay fuse (a Class CC time-delay fuse may go to 400 %; the fuse class is not known, so 225 % is used)"),
+            "time-delay fuse other than Class CC (write 'class-cc' for a Class CC fuse, which may go to 400 %)"),
         _ when p.FullLoadAmps <= 100 => (400m, "NEC 430.52(C)(1)(b)(3)", "inverse-time breaker, full-load current of 100 A or less"),
         _ => (300m, "NEC 430.52(C)(1)(b)(3)", "inverse-time breaker, full-load current above 100 A"),
     };
 
+    /// <summary>The devices that are columns of Table 430.52(C)(1); the others are permitted in lieu of them (430.52(C)(5)-(7)).</summary>
+    public static bool IsTableDevice(ProtectiveDevice d) =>
+        d is ProtectiveDevice.NonTimeDelayFuse or ProtectiveDevice.DualElementFuse or ProtectiveDevice.InstantaneousTripBreaker or ProtectiveDevice.InverseTimeBreaker;
+
+    /// <summary>Fuses take the fuse-only standard ratings of 240.6(A) (1, 3, 6 and 601 A).</summary>
+    public static bool IsFuse(ProtectiveDevice d) =>
+        d is ProtectiveDevice.NonTimeDelayFuse or ProtectiveDevice.DualElementFuse or ProtectiveDevice.SemiconductorFuse;
+
+    /// <summary>Devices whose value is an adjustable instantaneous setting, not a standard rating.</summary>
+    public static bool IsSetting(ProtectiveDevice d) =>
+        d is ProtectiveDevice.InstantaneousTripBreaker or ProtectiveDevice.MotorShortCircuitProtector or ProtectiveDevice.SelfProtectedController;
+
+    // Never a silent default: a device that is not a column of the table has no percentage there.
     private static string ColumnName(ProtectiveDevice d) => d switch
     {
         ProtectiveDevice.NonTimeDelayFuse => "non-time-delay-fuse",
         ProtectiveDevice.DualElementFuse => "dual-element-fuse",
         ProtectiveDevice.InstantaneousTripBreaker => "instantaneous-trip-breaker",
-        _ => "inverse-time-breaker",
+        ProtectiveDevice.InverseTimeBreaker => "inverse-time-breaker",
+        _ => throw new ArgumentOutOfRangeException(nameof(d), d, "not a column of Table 430.52(C)(1)"),
     };
 
     public static string DeviceName(ProtectiveDevice d) => d switch
@@ -152,6 +173,10 @@ public static class ShortCircuitProtection
         ProtectiveDevice.NonTimeDelayFuse => "non-time-delay fuse",
         ProtectiveDevice.DualElementFuse => "dual-element (time-delay) fuse",
         ProtectiveDevice.InstantaneousTripBreaker => "instantaneous-trip breaker",
-        _ => "inverse-time breaker",
+        ProtectiveDevice.InverseTimeBreaker => "inverse-time breaker",
+        ProtectiveDevice.MotorShortCircuitProtector => "motor short-circuit protector",
+        ProtectiveDevice.SelfProtectedController => "self-protected combination controller",
+        ProtectiveDevice.SemiconductorFuse => "semiconductor fuse",
+        _ => d.ToString(),
     };
 }
