@@ -15,7 +15,9 @@ public static class CommandLine
         root.Options.Add(color);
         root.Subcommands.Add(CheckCommand.Create(stdout, stderr, env, color));
         root.Subcommands.Add(FormatCommand.Create(stdout, stderr, env));
-        root.Subcommands.Add(ScheduleCommand.Create(stdout, env));
+        root.Subcommands.Add(ScheduleCommand.Create(stdout, stderr, env));
+        root.Subcommands.Add(ReportCommand.CreateReport(stdout, stderr, env));
+        root.Subcommands.Add(ReportCommand.CreateDiagram(stdout, stderr, env));
         root.Subcommands.Add(SizeCommand.Create(stdout, stderr));
         root.Subcommands.Add(DiffCommand.Create(stdout));
         root.Subcommands.Add(ExplainCommand.Create(stdout));

@@ -12,15 +12,16 @@ namespace MotorLang.Cli;
 /// <summary>`motorlang schedule`: one row per motor, computed and specified sizes side by side, then feeder totals.</summary>
 public static class ScheduleCommand
 {
-    public static Command Create(TextWriter stdout, CliEnvironment env)
+    public static Command Create(TextWriter stdout, TextWriter stderr, CliEnvironment env)
     {
-        var file = new Argument<string>("file") { Description = "A motor-list file" };
+        var file = new Argument<string>("file") { Description = "A motor-list file, or - to read the list from standard input" };
+        var stdinName = Inputs.CreateStdinNameOption();
         var format = new Option<string>("--format") { Description = "table, csv, markdown, json or xlsx", DefaultValueFactory = _ => "table" };
         format.AcceptOnlyFromAmong("table", "csv", "markdown", "json", "xlsx");
         var table = new Option<string>("--table") { Description = "For csv: the motors table or the feeders table", DefaultValueFactory = _ => "motors" };
         table.AcceptOnlyFromAmong("motors", "feeders");
         var output = SharedOptions.Output("the schedule (required for xlsx)");
-        var command = new Command("schedule", "Print the motor schedule with computed and specified sizes") { file, format, table, output };
+        var command = new Command("schedule", "Print the motor schedule with computed and specified sizes") { file, format, table, output, stdinName };
         command.Validators.Add(r =>
         {
             if (r.GetValue(format) == "xlsx" && r.GetValue(output) is null) r.AddError("--format xlsx writes a workbook: name the file with --output FILE");
@@ -29,8 +30,9 @@ public static class ScheduleCommand
         command.SetAction(result =>
         {
             var path = result.GetValue(file)!;
-            var source = SourceFiles.Expand([path])[0];
-            var analysis = Analyzer.Analyze(SourceFiles.Read(source));
+            var inputs = Inputs.Resolve([path], result.GetValue(stdinName), env, stderr);
+            var source = inputs.Names[0];
+            var analysis = Analyzer.Analyze(inputs.Read(source));
             var chosen = result.GetValue(format);
             var target = result.GetValue(output);
             if (chosen == "xlsx")

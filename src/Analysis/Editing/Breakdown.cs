@@ -73,7 +73,8 @@ public static class Breakdown
         _ => true,
     };
 
-    private static IEnumerable<BreakdownSection> MotorSections(MotorResult m)
+    /// <summary>A motor's whole calculation, section by section (the hover on its header; the report's calculation sheet).</summary>
+    public static IEnumerable<BreakdownSection> MotorSections(MotorResult m)
     {
         yield return new BreakdownSection(m.IsCompressor ? CompressorCurrent : "Full-load current", m.FullLoadCurrent.Steps, m.FullLoadCurrent.Unavailable);
         if (m.RequiredAmpacity is { } req)
@@ -117,7 +118,8 @@ public static class Breakdown
         if (lr.Count > 0) yield return new BreakdownSection("Locked-rotor current", lr);
     }
 
-    private static IEnumerable<BreakdownSection> FeederSections(FeederResult f)
+    /// <summary>A feeder's whole calculation, section by section.</summary>
+    public static IEnumerable<BreakdownSection> FeederSections(FeederResult f)
     {
         if (f.RequiredAmpacity is { } req)
         {

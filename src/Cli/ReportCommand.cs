@@ -1,0 +1,50 @@
+using System.CommandLine;
+using System.Reflection;
+using MotorLang.Analysis;
+using MotorLang.Cli.Usage;
+using MotorLang.Report;
+using MotorLang.Report.Diagram;
+
+namespace MotorLang.Cli;
+
+/// <summary>`motorlang report` and `motorlang diagram`: the issued report as one HTML file, and the one-line diagram as SVG.</summary>
+public static class ReportCommand
+{
+    public static Command CreateReport(TextWriter stdout, TextWriter stderr, CliEnvironment env) => Create("report",
+        "Write the motor schedule, feeder schedule, findings, one-line diagram and calculation sheets as one self-contained HTML file",
+        stdout, stderr, env, (analysis, name, date) => PlantReport.Html(analysis, new ReportInfo(name, Version, date)));
+
+    public static Command CreateDiagram(TextWriter stdout, TextWriter stderr, CliEnvironment env) => Create("diagram",
+        "Write the one-line diagram (supply, feeders, motors, loads) as SVG",
+        stdout, stderr, env, (analysis, name, _) => OneLineDiagram.Svg(analysis, $"{analysis.Parse.Model.Project?.Name?.Value ?? name} one-line diagram") + "\n");
+
+    private static Command Create(string verb, string description, TextWriter stdout, TextWriter stderr, CliEnvironment env, Func<AnalysisResult, string, DateOnly, string> write)
+    {
+        var file = new Argument<string>("file") { Description = "A motor-list file, or - to read the list from standard input" };
+        var output = SharedOptions.Output(verb == "report" ? "the report" : "the diagram");
+        var name = new Option<string?>("--name") { Description = "The list's name in the title block (default: the path given)" };
+        var date = new Option<string?>("--date") { Description = "Date of issue, yyyy-MM-dd (default: today, UTC)" };
+        var stdinName = Inputs.CreateStdinNameOption();
+        var command = new Command(verb, description) { file, output, name, stdinName };
+        if (verb == "report") command.Options.Add(date);
+        command.SetAction(result =>
+        {
+            var inputs = Inputs.Resolve([result.GetValue(file)!], result.GetValue(stdinName), env, stderr);
+            var text = inputs.Read(inputs.Names[0]);
+            var listName = result.GetValue(name) ?? inputs.Names[0];
+            var issued = DateOnly.FromDateTime(DateTime.UtcNow);
+            if (result.GetValue(date) is { } d && !DateOnly.TryParseExact(d, "yyyy-MM-dd", out issued))
+                throw new CliException($"--date '{d}' is not a date written yyyy-MM-dd");
+            var analysis = Analyzer.Analyze(text);
+            var content = write(analysis, listName, issued);
+            if (result.GetValue(output) is { } path) SourceFiles.WriteOutput(path, System.Text.Encoding.UTF8.GetBytes(content));
+            else stdout.Write(content);
+            return analysis.HasErrors ? ExitCodes.Findings : ExitCodes.Clean;
+        });
+        return command;
+    }
+
+    private static string Version =>
+        typeof(ReportCommand).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion.Split('+')[0]
+        ?? typeof(ReportCommand).Assembly.GetName().Version?.ToString() ?? "0";
+}
