@@ -1,0 +1,175 @@
+using System.Text.Json.Nodes;
+using System.Text.RegularExpressions;
+using PuppeteerSharp;
+using PuppeteerSharp.Media;
+using UglyToad.PdfPig;
+
+namespace MotorLang.Report.Tests;
+
+/// <summary>
+/// The HTML report of an example opened in headless Chromium: it loads with no console errors and no
+/// request beyond itself, every motor is in the schedule with the JSON schedule's numbers, and printing
+/// gives one page per sheet with no table row cut by a page break.
+/// </summary>
+[Collection(BrowserCollection.Name)]
+public sealed partial class ReportBrowserTests(ChromiumFixture chromium) : IAsyncLifetime
+{
+    private const string Example = "dairy-bottling.motors";
+    private string _html = "";
+    private JsonNode _json = null!;
+
+    public Task InitializeAsync()
+    {
+        _html = Path.Combine(Path.GetTempPath(), $"motorlang-report-{Guid.NewGuid():N}.html");
+        var (code, _, stderr) = Plants.Run("report", Plants.ExamplePath(Example), "-o", _html, "--name", Example, "--date", "2026-01-15");
+        Assert.True(code is 0 or 1, stderr);
+        var (_, json, _) = Plants.Run("schedule", Plants.ExamplePath(Example), "--format", "json");
+        _json = JsonNode.Parse(json)!;
+        return Task.CompletedTask;
+    }
+
+    public Task DisposeAsync()
+    {
+        File.Delete(_html);
+        return Task.CompletedTask;
+    }
+
+    private async Task<(IPage Page, List<string> Problems)> Open()
+    {
+        var page = await chromium.Browser.NewPageAsync();
+        var problems = new List<string>();
+        page.Console += (_, e) =>
+        {
+            if (e.Message.Type is ConsoleType.Error or ConsoleType.Warning) problems.Add($"console {e.Message.Type}: {e.Message.Text}");
+        };
+        page.PageError += (_, e) => problems.Add("page error: " + e.Message);
+        await page.SetRequestInterceptionAsync(true);
+        page.Request += async (_, e) =>
+        {
+            // The report is self-contained: the file itself is the only request it may make.
+            if (e.Request.Url == new Uri(_html).AbsoluteUri) await e.Request.ContinueAsync();
+            else
+            {
+                problems.Add("request: " + e.Request.Url);
+                await e.Request.AbortAsync();
+            }
+        };
+        await page.SetViewportAsync(new ViewPortOptions { Width = 1400, Height = 900 });
+        await page.GoToAsync(new Uri(_html).AbsoluteUri, WaitUntilNavigation.Load);
+        return (page, problems);
+    }
+
+    [Fact]
+    public async Task Loads_cleanly_with_every_motor_and_the_json_schedules_numbers()
+    {
+        var (page, problems) = await Open();
+        await using var _ = page;
+        Assert.Empty(problems);
+
+        var rows = _json["Rows"]!.AsArray();
+        var tags = await page.EvaluateExpressionAsync<string[]>("[...document.querySelectorAll('table.motors tr.motor')].map(r => r.dataset.tag)");
+        Assert.Equal(rows.Select(r => (string)r!["Tag"]!).ToArray(), tags);
+        Assert.Equal(5, tags.Length); // examples/dairy-bottling.motors writes five motors
+
+        // Every JSON field with a number in it is shown in that motor's row, with the same numbers.
+        var cells = await page.EvaluateExpressionAsync<Dictionary<string, Dictionary<string, string>>>(
+            "Object.fromEntries([...document.querySelectorAll('table.motors tr.motor')].map(r => [r.dataset.tag, " +
+            "Object.fromEntries([...r.querySelectorAll('[data-json]')].map(s => [s.dataset.json, s.textContent]))]))");
+        var compared = 0;
+        foreach (var row in rows)
+        {
+            var tag = (string)row!["Tag"]!;
+            foreach (var (field, value) in row.AsObject())
+            {
+                if (TextFields.Contains(field)) continue;
+                var expected = Numbers(value);
+                if (expected.Count == 0) continue;
+                Assert.True(cells[tag].TryGetValue(field, out var shown), $"{tag}: {field} is not in the report");
+                Assert.Equal(expected, Numbers(JsonValue.Create(shown)));
+                compared++;
+            }
+        }
+
+        Assert.True(compared >= 5 * 10, $"only {compared} values compared");
+
+        var feeders = await page.EvaluateExpressionAsync<string[]>("[...document.querySelectorAll('table.feeders tr.feeder')].map(r => r.dataset.tag)");
+        Assert.Equal(_json["Feeders"]!.AsArray().Select(f => (string)f!["Tag"]!).ToArray(), feeders);
+
+        var shot = Path.Combine(Plants.ArtifactFolder(), "report-dairy-bottling.png");
+        await page.ScreenshotAsync(shot, new ScreenshotOptions { FullPage = true });
+        Assert.True(new FileInfo(shot).Length > 10_000);
+    }
+
+    /// <summary>Page sizes and the report's @page margins (14 mm top, 12 mm bottom, 10 mm sides) in CSS pixels, 96 to the inch.</summary>
+    public static TheoryData<string, decimal, decimal> Papers => new()
+    {
+        { "A3", 420m, 297m },     // ISO 216 A3, landscape
+        { "Tabloid", 431.8m, 279.4m }, // 17 × 11 in, landscape
+        { "Letter", 279.4m, 215.9m }, // 11 × 8.5 in, landscape
+    };
+
+    [Theory]
+    [MemberData(nameof(Papers))]
+    public async Task Prints_one_page_per_sheet_and_cuts_no_row(string paper, decimal widthMm, decimal heightMm)
+    {
+        var (page, problems) = await Open();
+        await using var _ = page;
+        const double pxPerMm = 96 / 25.4;
+        var contentWidth = (double)(widthMm - 20) * pxPerMm;
+        var contentHeight = (double)(heightMm - 26) * pxPerMm;
+
+        // Lay the document out as print does, one page wide, and measure every sheet and row against a page box.
+        await page.EmulateMediaTypeAsync(MediaType.Print);
+        await page.SetViewportAsync(new ViewPortOptions { Width = (int)Math.Floor(contentWidth), Height = 800 });
+        var sheets = await page.EvaluateExpressionAsync<Sheet[]>(
+            "[...document.querySelectorAll('section.sheet')].map(s => { const top = s.getBoundingClientRect().top; " +
+            "return { id: s.id, height: s.getBoundingClientRect().height, " +
+            "rows: [...s.querySelectorAll('tr, .section, li')].map(r => { const b = r.getBoundingClientRect(); return { top: b.top - top, bottom: b.bottom - top }; }) }; })");
+        // 4 sheets before the calculations, one per motor (5) and feeder (1), then 3 after.
+        Assert.Equal(4 + 5 + 1 + 3, sheets.Length);
+        foreach (var s in sheets)
+        {
+            Assert.True(s.Height <= contentHeight, $"{paper}: sheet {s.Id} is {s.Height:0} px tall, a page holds {contentHeight:0}");
+            foreach (var r in s.Rows) Assert.True(Math.Floor(r.Top / contentHeight) == Math.Floor((r.Bottom - 0.5) / contentHeight), $"{paper}: a row of {s.Id} crosses a page");
+        }
+
+        var pdf = await page.PdfDataAsync(new PdfOptions
+        {
+            Format = paper switch { "A3" => PaperFormat.A3, "Tabloid" => PaperFormat.Tabloid, _ => PaperFormat.Letter },
+            Landscape = true,
+            PrintBackground = true,
+        });
+        await File.WriteAllBytesAsync(Path.Combine(Plants.ArtifactFolder(), $"report-dairy-bottling-{paper}.pdf"), pdf);
+        using var document = PdfDocument.Open(pdf);
+        Assert.Equal(sheets.Length, document.NumberOfPages);
+        // Each printed page begins its own sheet: its title is on it, and the running footer numbers it.
+        for (var i = 0; i < document.NumberOfPages; i++)
+        {
+            var text = document.GetPage(i + 1).Text;
+            Assert.Contains($"Page {i + 1} of {document.NumberOfPages}", text);
+        }
+
+        Assert.Contains("Motor schedule", document.GetPage(1).Text);
+        Assert.Contains("Calculation sheet — motor P-101", document.GetPage(5).Text);
+        Assert.Empty(problems);
+    }
+
+    /// <summary>Names and words, not quantities (a tag such as MCC-B1 holds digits that are not a value).</summary>
+    private static readonly HashSet<string> TextFields = new(StringComparer.OrdinalIgnoreCase) { "Feeder", "Tag", "Description", "Status", "RulesApplied", "NotChecked", "Cells" };
+
+    private static List<decimal> Numbers(JsonNode? node) => node switch
+    {
+        JsonValue v when v.TryGetValue<decimal>(out var d) => [d],
+        JsonValue v when v.TryGetValue<string>(out var s) => NumberPattern().Matches(s).Select(m => decimal.Parse(m.Value, System.Globalization.CultureInfo.InvariantCulture)).ToList(),
+        JsonObject o => o.SelectMany(p => Numbers(p.Value)).ToList(),
+        JsonArray a => a.SelectMany(Numbers).ToList(),
+        _ => [],
+    };
+
+    [GeneratedRegex(@"\d+(\.\d+)?")]
+    private static partial Regex NumberPattern();
+
+    public sealed record Box(double Top, double Bottom);
+
+    public sealed record Sheet(string Id, double Height, Box[] Rows);
+}
