@@ -1,6 +1,6 @@
 using System.Reflection;
 using MotorLang.Analysis;
-using MotorLang.Analysis.Reports;
+using MotorLang.Analysis.Reports.Data;
 using MotorLang.Report.Diagram;
 using MotorLang.Report.Html;
 
@@ -16,9 +16,9 @@ public static class PlantReport
 {
     public static string Html(AnalysisResult analysis, ReportInfo info)
     {
-        var project = analysis.Parse.Model.Project?.Name?.Value is { Length: > 0 } name ? name : Path.GetFileNameWithoutExtension(info.SourceName);
-        var block = new TitleBlock(project, info.SourceName, info.Date, info.ToolVersion);
-        var schedule = Schedule.Of(analysis);
+        var data = ScheduleDataBuilder.Of(analysis, info.SourceName);
+        var project = data.Title.Project is { Length: > 0 } name ? name : Path.GetFileNameWithoutExtension(info.SourceName);
+        var block = new SheetTitle(project, info.SourceName, info.Date, info.ToolVersion, data.Title);
         var page = new Page();
         page.Raw("<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\">")
             .Raw("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">")
@@ -26,8 +26,8 @@ public static class PlantReport
             .El("title", $"{project} — motor schedule and calculations")
             .Raw("<style>").Raw(Css).Raw(block.PageCss()).Raw("</style></head><body>");
         Contents(page, analysis);
-        MotorScheduleSheet.Write(page, analysis, schedule, block);
-        FeederScheduleSheet.Write(page, analysis, schedule, block);
+        MotorScheduleSheet.Write(page, analysis, data, block);
+        FeederScheduleSheet.Write(page, analysis, data, block);
         FindingsSheet.Write(page, analysis, block);
         page.SheetStart("diagram", "One-line diagram", block, "landscape diagram");
         page.Raw("<div class=\"figure\">").Raw(OneLineDiagram.Svg(analysis, $"{project} one-line diagram")).Raw("</div>");

@@ -66,34 +66,17 @@ public sealed partial class ReportBrowserTests(ChromiumFixture chromium) : IAsyn
         await using var _ = page;
         Assert.Empty(problems);
 
-        var rows = _json["Rows"]!.AsArray();
+        var rows = _json["motors"]!.AsArray();
         var tags = await page.EvaluateExpressionAsync<string[]>("[...document.querySelectorAll('table.motors tr.motor')].map(r => r.dataset.tag)");
-        Assert.Equal(rows.Select(r => (string)r!["Tag"]!).ToArray(), tags);
+        Assert.Equal(rows.Select(r => (string)r!["tag"]!).ToArray(), tags);
         Assert.Equal(5, tags.Length); // examples/dairy-bottling.motors writes five motors
 
-        // Every JSON field with a number in it is shown in that motor's row, with the same numbers.
-        var cells = await page.EvaluateExpressionAsync<Dictionary<string, Dictionary<string, string>>>(
-            "Object.fromEntries([...document.querySelectorAll('table.motors tr.motor')].map(r => [r.dataset.tag, " +
-            "Object.fromEntries([...r.querySelectorAll('[data-json]')].map(s => [s.dataset.json, s.textContent]))]))");
-        var compared = 0;
-        foreach (var row in rows)
-        {
-            var tag = (string)row!["Tag"]!;
-            foreach (var (field, value) in row.AsObject())
-            {
-                if (TextFields.Contains(field)) continue;
-                var expected = Numbers(value);
-                if (expected.Count == 0) continue;
-                Assert.True(cells[tag].TryGetValue(field, out var shown), $"{tag}: {field} is not in the report");
-                Assert.Equal(expected, Numbers(JsonValue.Create(shown)));
-                compared++;
-            }
-        }
-
-        Assert.True(compared >= 5 * 10, $"only {compared} values compared");
+        // Every JSON field with a number in it is shown in that motor's or feeder's row, with the same numbers.
+        var compared = await CompareRows(page, "table.motors tr.motor", rows) + await CompareRows(page, "table.feeders tr.feeder", _json["feeders"]!.AsArray());
+        Assert.True(compared >= 5 * 15 + 8, $"only {compared} values compared");
 
         var feeders = await page.EvaluateExpressionAsync<string[]>("[...document.querySelectorAll('table.feeders tr.feeder')].map(r => r.dataset.tag)");
-        Assert.Equal(_json["Feeders"]!.AsArray().Select(f => (string)f!["Tag"]!).ToArray(), feeders);
+        Assert.Equal(_json["feeders"]!.AsArray().Select(f => (string)f!["tag"]!).ToArray(), feeders);
 
         var shot = Path.Combine(Plants.ArtifactFolder(), "report-dairy-bottling.png");
         await page.ScreenshotAsync(shot, new ScreenshotOptions { FullPage = true });
@@ -154,8 +137,38 @@ public sealed partial class ReportBrowserTests(ChromiumFixture chromium) : IAsyn
         Assert.Empty(problems);
     }
 
-    /// <summary>Names and words, not quantities (a tag such as MCC-B1 holds digits that are not a value).</summary>
-    private static readonly HashSet<string> TextFields = new(StringComparer.OrdinalIgnoreCase) { "Feeder", "Tag", "Description", "Status", "RulesApplied", "NotChecked", "Cells" };
+    private static async Task<int> CompareRows(IPage page, string rowSelector, JsonArray rows)
+    {
+        var cells = await page.EvaluateExpressionAsync<Dictionary<string, Dictionary<string, string>>>(
+            $"Object.fromEntries([...document.querySelectorAll('{rowSelector}')].map(r => [r.dataset.tag, " +
+            "Object.fromEntries([...r.querySelectorAll('[data-json]')].map(s => [s.dataset.json, s.textContent]))]))");
+        var compared = 0;
+        foreach (var row in rows)
+        {
+            var tag = (string)row!["tag"]!;
+            foreach (var (field, value) in row.AsObject())
+            {
+                if (NotScheduleValues.Contains(field)) continue;
+                // Shown only where they say something: a count above one, a rated voltage other than the system's.
+                if (field == "quantity" && (int)value! == 1) continue;
+                if (field == "ratedVolts" && value?.ToJsonString() == row["volts"]?.ToJsonString()) continue;
+                var expected = Numbers(value);
+                if (expected.Count == 0) continue;
+                Assert.True(cells[tag].TryGetValue(field, out var shown), $"{tag}: {field} is not in the report");
+                Assert.True(expected.SequenceEqual(Numbers(JsonValue.Create(shown))), $"{tag}: {field} is {shown} in the report, {value!.ToJsonString()} in the JSON");
+                compared++;
+            }
+        }
+
+        return compared;
+    }
+
+    /// <summary>
+    /// Fields that are not the schedule's values: names (a tag such as MCC-B1 holds digits), where the row is
+    /// written, and the lists the calculation sheets show (findings, rules applied, rules not checked).
+    /// </summary>
+    private static readonly HashSet<string> NotScheduleValues = new(StringComparer.Ordinal)
+        { "file", "line", "feeder", "tag", "description", "status", "findings", "notComputed", "rulesApplied", "notChecked", "phases" };
 
     private static List<decimal> Numbers(JsonNode? node) => node switch
     {

@@ -27,7 +27,7 @@ public static class Assumptions
         ("raceway", "raceway"), ("ccc", "current-carrying conductors"), ("drop-limit", "voltage-drop limits"), ("power-factor", "power factor"),
     ];
 
-    public static void WriteAssumptions(Page page, AnalysisResult analysis, TitleBlock block)
+    public static void WriteAssumptions(Page page, AnalysisResult analysis, SheetTitle block)
     {
         var model = analysis.Parse.Model;
         page.SheetStart("assumptions", "Assumptions and readings used", block);
@@ -82,7 +82,7 @@ public static class Assumptions
         return found.Select(p => (p.Key.Item1, p.Key.Item2, p.Value)).ToList();
     }
 
-    public static void WriteNotChecked(Page page, AnalysisResult analysis, TitleBlock block)
+    public static void WriteNotChecked(Page page, AnalysisResult analysis, SheetTitle block)
     {
         page.SheetStart("not-checked", "What was not checked", block);
         page.El("p", "These rules bear on the circuits of this list but MotorLang does not check them. The engineer of record must.", "class=\"lead\"");
@@ -101,7 +101,7 @@ public static class Assumptions
         page.SheetEnd();
     }
 
-    public static void WriteSources(Page page, TitleBlock block)
+    public static void WriteSources(Page page, SheetTitle block)
     {
         page.SheetStart("sources", "Tool, tables and cautions", block);
         page.El("h3", "Cautions");

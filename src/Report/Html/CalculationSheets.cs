@@ -16,7 +16,7 @@ namespace MotorLang.Report.Html;
 /// </summary>
 public static class CalculationSheets
 {
-    public static void Write(Page page, AnalysisResult analysis, TitleBlock block)
+    public static void Write(Page page, AnalysisResult analysis, SheetTitle block)
     {
         var model = analysis.Parse.Model;
         foreach (var m in analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index))

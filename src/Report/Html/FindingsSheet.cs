@@ -7,7 +7,7 @@ namespace MotorLang.Report.Html;
 /// <summary>Every finding of the list: counts by severity, then one row each with its circuit, line, code and message.</summary>
 public static class FindingsSheet
 {
-    public static void Write(Page page, AnalysisResult analysis, TitleBlock block)
+    public static void Write(Page page, AnalysisResult analysis, SheetTitle block)
     {
         page.SheetStart("findings", "Findings", block);
         var f = analysis.Findings;

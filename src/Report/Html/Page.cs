@@ -25,7 +25,7 @@ public sealed class Page
     public Page Close(string tag) => Raw($"</{tag}>");
 
     /// <summary>The heading every sheet opens with: its title over the title block.</summary>
-    public Page SheetStart(string id, string title, TitleBlock block, string? cssClass = null)
+    public Page SheetStart(string id, string title, SheetTitle block, string? cssClass = null)
     {
         Open("section", $"class=\"sheet{(cssClass is null ? "" : " " + cssClass)}\" id=\"{Svg.E(id)}\"");
         block.Write(this, title);
