@@ -12,6 +12,7 @@ import {
   ServerOptions,
   TransportKind,
 } from "vscode-languageclient/node";
+import { clickedLine, outcome, previewHtml, runWithInput, stdinArgs } from "./cli";
 import { commandTarget, ExtensionSettings, findRuntime, resolveServer, runtimeProblem, serverEnvironment, serverSettings } from "./config";
 
 let client: LanguageClient | undefined;
@@ -88,21 +89,88 @@ async function sizeEverything(arg: unknown): Promise<void> {
   await vscode.workspace.applyEdit(edit);
 }
 
-async function showSchedule(context: vscode.ExtensionContext, arg: unknown): Promise<void> {
+/** The motor list a command works on, as the editor holds it (unsaved edits included); nothing is saved. */
+async function targetDocument(arg: unknown, what: string): Promise<vscode.TextDocument | undefined> {
   const editor = vscode.window.activeTextEditor;
   const target = commandTarget(arg, editor?.document.uri.toString(), editor?.document.languageId);
   if (!target) {
-    void vscode.window.showInformationMessage("Open a .motors file to see its schedule.");
+    void vscode.window.showInformationMessage(`Open a .motors file to see its ${what}.`);
+    return undefined;
+  }
+  return vscode.workspace.openTextDocument(vscode.Uri.parse(target));
+}
+
+/** Runs a reporting command of the command line on the buffer's text, passed on standard input. */
+async function runOnBuffer(context: vscode.ExtensionContext, document: vscode.TextDocument, command: string[]) {
+  const server = resolveServer(readSettings(), context.extensionPath, vscode.workspace.isTrusted);
+  const name = document.uri.scheme === "file" ? document.uri.fsPath : document.uri.toString();
+  return outcome(await runWithInput(server.command, stdinArgs(server.args, command, name), document.getText(), 30000, serverEnvironment(process.env)));
+}
+
+async function showSchedule(context: vscode.ExtensionContext, arg: unknown): Promise<void> {
+  const document = await targetDocument(arg, "schedule");
+  if (!document) return;
+  const result = await runOnBuffer(context, document, ["schedule", "--format", "markdown"]);
+  if ("failure" in result) {
+    void vscode.window.showErrorMessage(result.failure);
     return;
   }
-  const uri = vscode.Uri.parse(target);
-  const document = await vscode.workspace.openTextDocument(uri);
-  if (document.isDirty) await document.save();
-  const server = resolveServer(readSettings(), context.extensionPath, vscode.workspace.isTrusted);
-  const args = [...server.args.slice(0, -1), "schedule", "--format", "markdown", uri.fsPath];
-  const markdown = await run(server.command, args);
-  const shown = await vscode.workspace.openTextDocument({ language: "markdown", content: `# Schedule: ${uri.fsPath}\n\n${markdown}` });
+  // A list with errors still has a schedule: show it, and say where the errors are.
+  const note = result.hasErrors ? "> The list has errors (see the Problems panel); rows with errors name their codes under Status.\n\n" : "";
+  const title = document.uri.scheme === "file" ? document.uri.fsPath : document.uri.toString();
+  const shown = await vscode.workspace.openTextDocument({ language: "markdown", content: `# Schedule: ${title}\n\n${note}${result.text}` });
   await vscode.commands.executeCommand("markdown.showPreviewToSide", shown.uri);
+}
+
+/** One report preview per motor list, beside its editor, redrawn a moment after each edit. */
+const previews = new Map<string, vscode.WebviewPanel>();
+
+async function showReportPreview(context: vscode.ExtensionContext, arg: unknown): Promise<void> {
+  const document = await targetDocument(arg, "report");
+  if (!document) return;
+  const key = document.uri.toString();
+  const existing = previews.get(key);
+  if (existing) {
+    existing.reveal(vscode.ViewColumn.Beside, true);
+    return;
+  }
+  const panel = vscode.window.createWebviewPanel("motorlang.report", `Report: ${document.uri.path.split("/").pop()}`,
+    { viewColumn: vscode.ViewColumn.Beside, preserveFocus: true }, { enableScripts: true, localResourceRoots: [] });
+  previews.set(key, panel);
+  let timer: NodeJS.Timeout | undefined;
+  let generation = 0;
+  const render = async () => {
+    const mine = ++generation;
+    const current = vscode.workspace.textDocuments.find((d) => d.uri.toString() === key) ?? document;
+    const result = await runOnBuffer(context, current, ["report"]);
+    if (mine !== generation) return; // a later edit is already being drawn
+    const nonce = Array.from({ length: 24 }, () => Math.floor(Math.random() * 36).toString(36)).join("");
+    panel.webview.html = "failure" in result
+      ? `<!DOCTYPE html><html><body><p>${result.failure.replace(/[<&]/g, (c) => (c === "<" ? "&lt;" : "&amp;"))}</p></body></html>`
+      : previewHtml(result.text, nonce, panel.webview.cspSource);
+  };
+  const subscriptions = [
+    vscode.workspace.onDidChangeTextDocument((e) => {
+      if (e.document.uri.toString() !== key) return;
+      if (timer) clearTimeout(timer);
+      timer = setTimeout(() => void render(), 700);
+    }),
+    panel.webview.onDidReceiveMessage(async (message: unknown) => {
+      const line = clickedLine(message);
+      if (line === undefined) return;
+      const target = await vscode.workspace.openTextDocument(vscode.Uri.parse(key));
+      const editor = await vscode.window.showTextDocument(target, { viewColumn: vscode.ViewColumn.One, preserveFocus: false });
+      const position = new vscode.Position(Math.min(line, target.lineCount - 1), 0);
+      editor.selection = new vscode.Selection(position, position);
+      editor.revealRange(new vscode.Range(position, position), vscode.TextEditorRevealType.InCenterIfOutsideViewport);
+    }),
+  ];
+  panel.onDidDispose(() => {
+    if (timer) clearTimeout(timer);
+    subscriptions.forEach((d) => d.dispose());
+    previews.delete(key);
+  });
+  await render();
 }
 
 export async function activate(context: vscode.ExtensionContext): Promise<void> {
@@ -116,6 +184,7 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
     }),
     vscode.commands.registerCommand("motorlang.sizeEverything", sizeEverything),
     vscode.commands.registerCommand("motorlang.showSchedule", (arg: unknown) => showSchedule(context, arg)),
+    vscode.commands.registerCommand("motorlang.showReportPreview", (arg: unknown) => showReportPreview(context, arg)),
     vscode.workspace.onDidChangeConfiguration(async (e) => {
       if (!e.affectsConfiguration("motorlang") || !client) return;
       if (e.affectsConfiguration("motorlang.server") || e.affectsConfiguration("motorlang.dotnet")) {

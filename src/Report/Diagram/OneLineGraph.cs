@@ -12,7 +12,7 @@ public enum NodeKind { Source, Feeder, Motor, Load }
 
 /// <summary>
 /// One element of the one-line diagram: its kind, a stable id (the tag, or "supply"), the lines of its
-/// label (the first is the tag), the device that protects it, and the codes of its error findings.
+/// label (the first is the tag), the device that protects it, the codes of its error and warning findings, and its 1-based line (0 for the supply).
 /// </summary>
 public sealed record DiagramNode(string Id, NodeKind Kind, IReadOnlyList<string> Lines, ProtectiveDevice? Device, IReadOnlyList<string> Errors,
     IReadOnlyList<string> Warnings, int Line);
@@ -89,7 +89,7 @@ public sealed record OneLineGraph(IReadOnlyList<DiagramNode> Nodes, IReadOnlyLis
         }
 
         var (errors, warnings) = Codes(findings, feeder.Header.Line.Index, feeder.LastOwnLine);
-        return new DiagramNode(feeder.Tag.Value, NodeKind.Feeder, lines, feeder.Protection?.Value, errors, warnings, feeder.Header.Line.Index);
+        return new DiagramNode(feeder.Tag.Value, NodeKind.Feeder, lines, feeder.Protection?.Value, errors, warnings, feeder.Header.Line.Index + 1);
     }
 
     private static DiagramNode Motor(MotorResult m, Dictionary<int, List<(string Code, Severity Severity)>> findings)
@@ -102,7 +102,7 @@ public sealed record OneLineGraph(IReadOnlyList<DiagramNode> Nodes, IReadOnlyLis
         lines.Add(Labels.Conductors(m.Wire, m.MinimumWire?.Value, m.Ground));
         lines.Add(Labels.Protection(m.ProtectionRating, m.ProtectionRating is null ? null : m.Device, m.MaximumProtection?.Value, m.FirePumpMinimumProtection?.Value));
         var (errors, warnings) = Codes(findings, motor.Header.Line.Index, motor.LastLine);
-        return new DiagramNode(m.Tag, NodeKind.Motor, lines, m.ProtectionRating is null && motor.Protection is null ? null : m.Device, errors, warnings, motor.Header.Line.Index);
+        return new DiagramNode(m.Tag, NodeKind.Motor, lines, m.ProtectionRating is null && motor.Protection is null ? null : m.Device, errors, warnings, motor.Header.Line.Index + 1);
     }
 
     private static DiagramNode Load(LoadNode load, Dictionary<int, List<(string Code, Severity Severity)>> findings)
@@ -112,7 +112,7 @@ public sealed record OneLineGraph(IReadOnlyList<DiagramNode> Nodes, IReadOnlyLis
         var size = load.Current?.Value.ToString() ?? load.ApparentPower?.Value.ToString();
         if (size is not null) lines.Add(size + (load.Continuous ? " continuous" : ""));
         var (errors, warnings) = Codes(findings, load.Header.Line.Index, load.LastLine);
-        return new DiagramNode(load.Tag.Value, NodeKind.Load, lines, load.Protection?.Value, errors, warnings, load.Header.Line.Index);
+        return new DiagramNode(load.Tag.Value, NodeKind.Load, lines, load.Protection?.Value, errors, warnings, load.Header.Line.Index + 1);
     }
 
     /// <summary>Finding codes by line, so each block collects those on its own lines in one pass over the findings.</summary>

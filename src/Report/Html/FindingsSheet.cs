@@ -30,7 +30,7 @@ public static class FindingsSheet
         {
             var circuit = model.BlockAt(x.Range.Start.Line) is CircuitNode c ? c.Tag?.Value ?? "" : model.BlockAt(x.Range.Start.Line) is ProjectNode ? "project" : "";
             var css = x.Severity switch { Severity.Error => "err", Severity.Warning => "warn", _ => "info" };
-            page.Open("tr", $"class=\"finding {css}\" {Page.A("data-line", x.Range.Start.Line.ToString())}")
+            page.Open("tr", $"class=\"finding {css}\" {Page.A("data-line", (x.Range.Start.Line + 1).ToString())}")
                 .El("td", circuit, "class=\"tag\"").El("td", (x.Range.Start.Line + 1).ToString(), "class=\"num\"").El("td", x.Code, "class=\"code\"")
                 .El("td", x.Severity.ToString().ToLowerInvariant()).El("td", x.Message).Close("tr");
         }
