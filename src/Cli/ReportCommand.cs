@@ -29,7 +29,10 @@ public static class ReportCommand
         if (verb == "report") command.Options.Add(date);
         command.SetAction(result =>
         {
-            var inputs = Inputs.Resolve([result.GetValue(file)!], result.GetValue(stdinName), env, stderr);
+            var given = result.GetValue(file)!;
+            // A folder is a plant of several files; reporting only one of them would leave circuits out silently.
+            if (Directory.Exists(given)) throw new CliException($"'{given}' is a folder: {verb} takes one motor-list file (plants of several files are not reported yet)");
+            var inputs = Inputs.Resolve([given], result.GetValue(stdinName), env, stderr);
             var text = inputs.Read(inputs.Names[0]);
             var listName = result.GetValue(name) ?? inputs.Names[0];
             var issued = DateOnly.FromDateTime(DateTime.UtcNow);
