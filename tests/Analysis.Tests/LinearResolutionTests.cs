@@ -140,6 +140,26 @@ public sealed class LinearResolutionTests
     }
 
     [Fact]
+    public void FeederSizingDownAFromChainIsLinear()
+    {
+        // Each feeder of the chain carries every motor below it: adding them up per feeder from a
+        // list of everything downstream costs n²/2 motor visits, from the totals of the feeder below n.
+        var (small, _) = SizeAll(FromChain(100));
+        var (large, feeders) = SizeAll(FromChain(800));
+        Assert.True(large.FeederSteps < 20 * small.FeederSteps, $"steps {small.FeederSteps} for 100 feeders, {large.FeederSteps} for 800");
+
+        // Hand calculation: a 5 hp 480 V three-phase motor takes 7.6 A (NFPA 70-2023 Table 430.250,
+        // 460 V column). F-k carries the 801 - k motors of F-k to F-800, so NEC 430.24 requires
+        // 125 % × 7.6 A for one and 7.6 A for each of the 800 - k others.
+        foreach (var r in feeders.Values)
+        {
+            var k = int.Parse(r.Feeder.Tag!.Value[2..]);
+            Assert.Equal(1.25m * 7.6m + (800 - k) * 7.6m, r.RequiredAmpacity!.Value);
+            Assert.Equal((801 - k) * 7.6m, r.CalculatedLoad);
+        }
+    }
+
+    [Fact]
     public void AFromCycleIsFoundOnceAndItsFeedersAreNotSized()
     {
         static string Cycle(int n) => string.Join("\n", Enumerable.Range(1, n).Select(i => $"feeder F-{i} 480V 3ph\n  from F-{i % n + 1}\n  motor M-{i} 5hp")) + "\n";

@@ -16,10 +16,13 @@ namespace MotorLang.Analysis.Sizing;
 internal sealed partial class FeederSizer
 {
     /// <summary>Everything the feeder supplies, as the fire pump rules see it (motors first, then loads).</summary>
-    private static List<FirePumpPart> FirePumpParts(List<FeederNode> supplied, List<MotorResult> motors, decimal volts, Phases phases)
+    private List<FirePumpPart> FirePumpParts(FeederNode feeder, decimal volts, Phases phases)
     {
-        var parts = new List<FirePumpPart>(motors.Count);
-        foreach (var m in motors)
+        var supplied = Downstream(feeder).ToList();
+        Steps += supplied.Count;
+        var results = supplied.SelectMany(f => f.Motors).Select(m => motors.GetValueOrDefault(m)).OfType<MotorResult>().ToList();
+        var parts = new List<FirePumpPart>(results.Count);
+        foreach (var m in results)
             parts.Add(new FirePumpPart(m.Tag, m.FireService, m.FullLoadCurrent.Value!.Value, m.FirePumpLockedRotor?.Value, m.Quantity));
         foreach (var load in supplied.SelectMany(f => f.Loads))
         {

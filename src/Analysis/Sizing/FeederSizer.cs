@@ -35,8 +35,6 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
         }
 
         var settings = Settings.For(feeder, model);
-        var supplied = Downstream(feeder).ToList();
-        var motorResults = supplied.SelectMany(f => f.Motors).Select(m => motors.GetValueOrDefault(m)).OfType<MotorResult>().ToList();
         if (r.Volts > SystemVoltages.LowVoltageLimit)
         {
             findings.Add(new Finding(FindingCodes.OutsideScope, Severity.Warning, volts.Range,
@@ -44,8 +42,11 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
             return r;
         }
 
+        var device = feeder.Protection?.Value ?? ProtectiveDevice.InverseTimeBreaker;
+        var carried = CarriedBy(feeder, r.Volts, r.Phases, device);
+
         // Currents at another voltage cannot be added: a feeder supplied at another voltage is behind a transformer.
-        if (supplied.FirstOrDefault(f => f.Voltage is { } v && f.Phases is { } p && (v.Value.Value != r.Volts || p.Value != r.Phases)) is { } other)
+        if (carried.OtherVoltage is { } other)
         {
             Add(FindingCodes.SuppliesAnotherVoltage, Severity.Warning, feeder.Header.KeywordToken.Range,
                 $"the feeder cannot be sized: {other.Tag?.Value} ({other.Voltage?.Value}) is supplied from it at another voltage, so through a transformer, " +
@@ -53,7 +54,7 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
             return r;
         }
 
-        if (motorResults.FirstOrDefault(m => !m.FullLoadCurrent.HasValue) is { } unsized)
+        if (carried.Unsized is { } unsized)
         {
             // A sum without that motor would be a confident wrong number, so none is given.
             findings.Add(new Finding(FindingCodes.CannotCheck, Severity.Warning, feeder.Header.KeywordToken.Range,
@@ -62,34 +63,31 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
         }
 
         // A load with no current would be left out of the sum: then nothing on the feeder is sized.
-        var unknownLoads = supplied.SelectMany(f => f.Loads).Where(l => l.Current is null && l.ApparentPower is null).ToList();
-        if (unknownLoads.Count > 0)
+        if (carried.UnknownLoads is { Count: > 0 } unknownLoads)
         {
-            foreach (var load in unknownLoads.Where(l => l.Feeder == feeder))
+            foreach (var (load, _) in unknownLoads.Where(l => l.Load.Feeder == feeder))
                 Add(FindingCodes.CannotCheck, Severity.Warning, load.Header.KeywordToken.Range,
                     "the load has no current or kVA, so its feeder cannot be sized (NEC 430.24(3), (4)): write its amperes, e.g. 'load L-1 \"Heaters\" 12A'");
             Add(FindingCodes.CannotCheck, Severity.Warning, feeder.Header.KeywordToken.Range,
-                $"the feeder cannot be sized: {string.Join(", ", unknownLoads.Select(l => l.Tag?.Value ?? "a load"))} has no current or kVA");
+                $"the feeder cannot be sized: {string.Join(", ", unknownLoads.Select(l => l.Load.Tag?.Value ?? "a load"))} has no current or kVA");
             return r;
         }
 
-        var device = feeder.Protection?.Value ?? ProtectiveDevice.InverseTimeBreaker;
-        var feederMotors = motorResults.Select(m => AsFeederMotor(m, device)).ToList();
-        var loads = supplied.SelectMany(f => f.Loads).Select(l => LoadOf(l, r.Volts, r.Phases)).OfType<FeederLoad>().ToList();
-        var equipmentLoads = EquipmentLoads(motorResults);
-        r.CalculatedLoad = feederMotors.Sum(m => m.FullLoadAmps * m.Quantity) + loads.Sum(l => l.Amps) + equipmentLoads.Sum(l => l.Amps);
-        r.RequiredAmpacity = WithCompressors(Feeders.RequiredAmpacity(feederMotors, [.. loads, .. equipmentLoads]), motorResults, "NEC 440.33",
+        var totals = carried.Totals!;
+        r.CalculatedLoad = totals.RunningAmps + totals.LoadAmps;
+        r.RequiredAmpacity = WithCompressors(Feeders.RequiredAmpacity(totals), carried.Compressors, "NEC 440.33",
             "counted as motors at the rated-load or branch-circuit selection current, the larger; marked equipment's other loads are its minimum circuit ampacity less 125 % of that current");
         var fuse = ShortCircuitProtection.IsFuse(device);
-        var parts = FirePumpParts(supplied, motorResults, r.Volts, r.Phases);
-        r.SuppliesFirePump = parts.Any(p => p.Role == FireServiceRole.FirePump);
+        // A fire pump supply's rules list every part they add up, so they take the list itself.
+        var parts = carried.FirePump ? FirePumpParts(feeder, r.Volts, r.Phases) : [];
+        r.SuppliesFirePump = carried.FirePump;
         var governedBy695 = r.SuppliesFirePump && FirePumpAmpacity(r, parts);
         if (r.SuppliesFirePump)
             r.FirePumpMinimumProtection = FirePump.MinimumDevice(parts, fuse);
         else
             r.MaximumProtection = !ShortCircuitProtection.IsTableDevice(device) || device == ProtectiveDevice.InstantaneousTripBreaker
                 ? Result<decimal>.Missing(NotAFeederDevice(device))
-                : WithCompressors(Feeders.MaximumProtection(feederMotors, loads, fuse), motorResults, "NEC 430.62(A), 440.22",
+                : WithCompressors(Feeders.MaximumProtection(totals, fuse), carried.Compressors, "NEC 430.62(A), 440.22",
                     "a motor-compressor's branch device counts at its 440.22 maximum (under the marked maximum); marked equipment's other loads are left out, the lower limit");
         r.ProtectionRating = feeder.ProtectionRating?.Value.Value;
         var required = r.RequiredAmpacity.Value!.Value;
@@ -186,7 +184,11 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
         return _onCycle.Contains(feeder);
     }
 
-    /// <summary>Feeders visited while working out drops from the source and cycles of 'from'; tests use it to check the work grows linearly.</summary>
+    /// <summary>
+    /// Feeders visited while working out drops from the source and cycles of 'from', and feeders,
+    /// motors and loads visited while adding up what each feeder carries; tests use it to check
+    /// the work grows linearly.
+    /// </summary>
     internal long Steps { get; private set; }
 
     /// <summary>

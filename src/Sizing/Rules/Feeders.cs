@@ -23,27 +23,30 @@ public static class Feeders
     /// plus 100 % of non-continuous and 125 % of continuous other loads. A duty-cycle motor counts
     /// at its 430.22(E) current (Exception No. 1).
     /// </summary>
-    public static Result<decimal> RequiredAmpacity(IReadOnlyList<FeederMotor> motors, IReadOnlyList<FeederLoad> loads)
+    public static Result<decimal> RequiredAmpacity(IReadOnlyList<FeederMotor> motors, IReadOnlyList<FeederLoad> loads) =>
+        RequiredAmpacity(FeederSummary.Of(motors, loads));
+
+    /// <inheritdoc cref="RequiredAmpacity(IReadOnlyList{FeederMotor}, IReadOnlyList{FeederLoad})"/>
+    public static Result<decimal> RequiredAmpacity(FeederSummary carried)
     {
         var steps = new List<Step>();
-        var units = Expand(motors);
         var total = 0m;
-        var largest = units.OrderByDescending(m => m.FullLoadAmps).FirstOrDefault();
-        if (largest is not null)
+        if (carried.LargestMotor is { } pick)
         {
-            var (largestAmps, how) = LargestMotorAmps(largest, units);
+            var largest = pick.Motor;
+            var (largestAmps, how) = LargestMotorAmps(largest, carried.LargestContinuousMotor?.Motor);
             total += largestAmps;
             steps.Add(Step.Amps("Largest motor", largestAmps, largest.DutyCycleAmps is null ? "NEC 430.24(1), 430.17" : "NEC 430.24 Exception No. 1, 430.17", how));
-            var others = units.Where(u => !ReferenceEquals(u, largest)).Sum(u => u.DutyCycleAmps ?? u.FullLoadAmps);
+            var others = pick.Others;
             if (others > 0)
             {
                 total += others;
-                steps.Add(Step.Amps("Other motors", others, "NEC 430.24(2)", $"sum of the full-load currents of {units.Count - 1} other motor(s)"));
+                steps.Add(Step.Amps("Other motors", others, "NEC 430.24(2)", $"sum of the full-load currents of {carried.Units - 1} other motor(s)"));
             }
         }
 
-        var nonContinuous = loads.Where(l => !l.Continuous).Sum(l => l.Amps);
-        var continuous = loads.Where(l => l.Continuous).Sum(l => l.Amps);
+        var nonContinuous = carried.NonContinuousLoadAmps;
+        var continuous = carried.ContinuousLoadAmps;
         if (nonContinuous > 0)
         {
             total += nonContinuous;
@@ -65,10 +68,9 @@ public static class Feeders
     /// Exception No. 1) the greater of its 430.22(E) current and 125 % of the largest
     /// continuous-duty motor's full-load current.
     /// </summary>
-    private static (decimal Amps, string How) LargestMotorAmps(FeederMotor largest, List<FeederMotor> units)
+    private static (decimal Amps, string How) LargestMotorAmps(FeederMotor largest, FeederMotor? continuous)
     {
         if (largest.DutyCycleAmps is not { } duty) return (largest.FullLoadAmps * 1.25m, $"125 % × {Format.Amps(largest.FullLoadAmps)} ({largest.Tag})");
-        var continuous = units.Where(u => u.DutyCycleAmps is null).OrderByDescending(u => u.FullLoadAmps).FirstOrDefault();
         if (continuous is null || continuous.FullLoadAmps * 1.25m <= duty) return (duty, $"{largest.Tag} at its 430.22(E) duty-cycle current");
         return (continuous.FullLoadAmps * 1.25m,
             $"125 % × {Format.Amps(continuous.FullLoadAmps)} ({continuous.Tag}, the largest continuous-duty motor), greater than {largest.Tag}'s 430.22(E) current {Format.Amps(duty)}");
@@ -80,21 +82,24 @@ public static class Feeders
     /// standard rating, since the rule sets a ceiling and the next-size-up permission is for branch circuits only.
     /// Of several equal largest devices, one counts as the largest.
     /// </summary>
-    public static Result<decimal> MaximumProtection(IReadOnlyList<FeederMotor> motors, IReadOnlyList<FeederLoad> loads, bool fuse)
+    public static Result<decimal> MaximumProtection(IReadOnlyList<FeederMotor> motors, IReadOnlyList<FeederLoad> loads, bool fuse) =>
+        MaximumProtection(FeederSummary.Of(motors, loads), fuse);
+
+    /// <inheritdoc cref="MaximumProtection(IReadOnlyList{FeederMotor}, IReadOnlyList{FeederLoad}, bool)"/>
+    public static Result<decimal> MaximumProtection(FeederSummary carried, bool fuse)
     {
-        var units = Expand(motors);
-        if (units.Any(u => u.BranchDeviceMaximum is null))
+        if (carried.DeviceUnknown)
             return Result<decimal>.Missing("a motor on the feeder has no branch protection maximum, so the feeder limit cannot be worked out");
-        var largest = units.OrderByDescending(u => u.BranchDeviceMaximum).ThenByDescending(u => u.FullLoadAmps).FirstOrDefault();
         var steps = new List<Step>();
         var total = 0m;
-        if (largest is not null)
+        if (carried.LargestDevice is { } pick)
         {
+            var largest = pick.Motor;
             total += largest.BranchDeviceMaximum!.Value;
             steps.Add(largest.BranchDeviceBasis is { } basis
                 ? Step.Amps("Largest branch device", largest.BranchDeviceMaximum.Value, "NEC 430.62(A) Exception No. 1", $"{largest.Tag}, {basis}")
                 : Step.Amps("Largest branch device", largest.BranchDeviceMaximum.Value, "NEC 430.62(A)", $"{largest.Tag}, at its 430.52 maximum"));
-            var others = units.Where(u => !ReferenceEquals(u, largest)).Sum(u => u.FullLoadAmps);
+            var others = pick.Others;
             if (others > 0)
             {
                 total += others;
@@ -102,7 +107,7 @@ public static class Feeders
             }
         }
 
-        var otherLoads = loads.Sum(l => l.Continuous ? l.Amps * 1.25m : l.Amps);
+        var otherLoads = carried.ProtectionLoadAmps;
         if (otherLoads > 0)
         {
             total += otherLoads;
@@ -127,18 +132,5 @@ public static class Feeders
         var percent = ShortCircuitProtection.Percent(row, feederDevice);
         var amps = branch.FullLoadAmps * percent / 100m;
         return (amps, $"{ShortCircuitProtection.DeviceName(branch.Device)} assumed at {Format.Percent(percent)} × {Format.Amps(branch.FullLoadAmps)} (Table 430.52(C)(1), {ShortCircuitProtection.DeviceName(feederDevice)} column)");
-    }
-
-    /// <summary>One unit per motor: a line of several identical motors counts each (as distinct objects, so one can be "the largest").</summary>
-    private static List<FeederMotor> Expand(IReadOnlyList<FeederMotor> motors)
-    {
-        var units = new List<FeederMotor>(motors.Count);
-        foreach (var m in motors)
-        {
-            units.Add(m);
-            for (var i = 1; i < m.Quantity; i++) units.Add(m with { });
-        }
-
-        return units;
     }
 }
