@@ -27,6 +27,9 @@ switch (args)
     case ["process", var n, var motorlang]:
         await MemoryReports.Process(int.Parse(n), motorlang);
         break;
+    case ["open", var megabytes, var motorlang]:
+        await LargeOpen.Run(int.Parse(megabytes), motorlang);
+        break;
     case ["hostile", var motorlang, ..]:
         HostileLists.Run(motorlang, args.Length > 2 ? int.Parse(args[2]) : 1);
         break;
