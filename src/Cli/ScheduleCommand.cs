@@ -32,6 +32,17 @@ public static class ScheduleCommand
             var path = result.GetValue(file)!;
             var inputs = Inputs.Resolve([path], result.GetValue(stdinName), env, stderr);
             var source = inputs.Names[0];
+            if (path != "-" && PlantInputs.Group([source]) is [{ Plant: { } plant }])
+            {
+                var chosenForPlant = result.GetValue(format);
+                if (chosenForPlant is not ("table" or "markdown"))
+                    throw new CliException($"'{path}' is part of the plant in '{PlantInputs.Shown(plant.Root)}': its schedule can be printed as table or markdown; {chosenForPlant} is not written for a plant yet");
+                var (plantText, errors) = PlantSchedule(plant, chosenForPlant == "markdown", result.GetValue(output) is null && env.OutputIsTerminal ? env.TerminalWidth : null);
+                if (result.GetValue(output) is { } to) SourceFiles.WriteOutput(to, System.Text.Encoding.UTF8.GetBytes(plantText));
+                else stdout.Write(plantText);
+                return errors ? ExitCodes.Findings : ExitCodes.Clean;
+            }
+
             var analysis = Analyzer.Analyze(inputs.Read(source));
             var chosen = result.GetValue(format);
             var target = result.GetValue(output);
@@ -54,6 +65,39 @@ public static class ScheduleCommand
             return analysis.HasErrors ? ExitCodes.Findings : ExitCodes.Clean;
         });
         return command;
+    }
+
+    /// <summary>
+    /// A plant's schedule: every file's motors and feeders under the file's name (the feeders'
+    /// totals count what other files hang on them), then a line that sums up the plant.
+    /// </summary>
+    private static (string Text, bool Errors) PlantSchedule(Files.PlantFolder plant, bool markdown, int? width)
+    {
+        var analysis = PlantInputs.Analyze(plant);
+        var sb = new StringBuilder();
+        var joined = analysis.Joined;
+        var whole = joined is null ? new Schedule([], []) : Schedule.Of(joined);
+        // Schedule.Of lists motors and feeders in line order; the same order gives each row its file.
+        var motorFiles = joined?.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index).Select(m => analysis.FileOfLine(m.Motor.Header.Line.Index).File).ToList() ?? [];
+        var feederFiles = joined?.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index).Select(f => analysis.FileOfLine(f.Feeder.Header.Line.Index).File).ToList() ?? [];
+        foreach (var member in plant.Members)
+        {
+            var rows = whole.Rows.Where((_, i) => motorFiles[i] == member.Name).ToList();
+            var feeders = whole.Feeders.Where((_, i) => feederFiles[i] == member.Name).ToList();
+            sb.Append(markdown ? $"## {member.Name}\n\n" : $"== {PlantInputs.Shown(member.Path)}\n");
+            if (analysis.Apart.Contains(member.Name)) sb.Append("(not read: see 'motorlang check')\n\n");
+            else
+            {
+                var part = new Schedule(rows, feeders);
+                sb.Append(markdown ? Markdown(part) : ScheduleTable.Render(part, width, FeederHeaders, FeederCells)).Append('\n');
+            }
+        }
+
+        int errors = analysis.Findings.Count(f => f.Finding.Severity == MotorLang.Parser.Diagnostics.Severity.Error),
+            warnings = analysis.Findings.Count(f => f.Finding.Severity == MotorLang.Parser.Diagnostics.Severity.Warning);
+        sb.Append($"Plant {PlantInputs.Shown(plant.Root)}: {plant.Members.Count} files, {whole.Rows.Count} motors, {whole.Feeders.Count} feeders; "
+            + $"{errors} error{(errors == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")} (motorlang check lists them)\n");
+        return (sb.ToString(), analysis.HasErrors);
     }
 
     private static readonly string[] FeederHeaders =

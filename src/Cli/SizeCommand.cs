@@ -1,5 +1,6 @@
 using System.CommandLine;
 using MotorLang.Analysis.Fixes;
+using MotorLang.Analysis.Plant;
 using MotorLang.Cli.Output;
 using MotorLang.Cli.Usage;
 
@@ -23,9 +24,10 @@ public static class SizeCommand
         command.SetAction(result =>
         {
             var path = SourceFiles.Expand([result.GetValue(file)!])[0];
+            var say = result.GetValue(quiet) ? TextWriter.Null : stderr;
+            if (PlantInputs.Group([path]) is [{ Plant: { } plant }]) return SizePlant(plant, result.GetValue(dryRun), result.GetValue(check), result.GetValue(quiet), stdout, say);
             var before = SourceFiles.Read(path);
             var after = SizeAll.Apply(before);
-            var say = result.GetValue(quiet) ? TextWriter.Null : stderr;
             if (after == before)
             {
                 say.WriteLine($"{path}: nothing to change");
@@ -49,5 +51,37 @@ public static class SizeCommand
             return ExitCodes.Clean;
         });
         return command;
+    }
+
+    /// <summary>
+    /// A file of a plant is sized with the whole plant in view (a switchboard's feeder carries the
+    /// MCCs in other files), and every file whose values change is written, each atomically.
+    /// </summary>
+    private static int SizePlant(Files.PlantFolder plant, bool dryRun, bool check, bool quiet, TextWriter stdout, TextWriter say)
+    {
+        var before = plant.Members.Select(m => new PlantFile(m.Name, m.Text)).ToList();
+        var after = PlantSizeAll.Apply(before);
+        var changed = plant.Members.Select((m, i) => (Path: PlantInputs.Shown(m.Path), m.Path, Before: m.Text, After: after[i].Text)).Where(c => c.Before != c.After).ToList();
+        if (changed.Count == 0)
+        {
+            say.WriteLine($"{PlantInputs.Shown(plant.Root)}: nothing to change in the plant");
+            return ExitCodes.Clean;
+        }
+
+        foreach (var c in changed)
+        {
+            if (dryRun) stdout.Write(UnifiedDiff.Between(c.Item1, c.Before, c.After, "sized"));
+            else if (check)
+            {
+                if (!quiet) stdout.WriteLine($"{c.Item1}: would be sized");
+            }
+            else
+            {
+                SourceFiles.WriteAtomically(c.Item2, c.After);
+                say.WriteLine($"{c.Item1}: sized");
+            }
+        }
+
+        return dryRun || check ? ExitCodes.Findings : ExitCodes.Clean;
     }
 }

@@ -53,6 +53,45 @@ public sealed class CliTests : IDisposable
     }
 
     [Fact]
+    public void SizeOfAFileOfAPlantWritesTheFixIntoTheFileThatHoldsTheValue()
+    {
+        var plant = Path.Combine(_dir, "sized");
+        Directory.CreateDirectory(plant);
+        var swbd = Path.Combine(plant, "swbd.motors");
+        File.WriteAllText(swbd, "project \"P\"\n  plant\nfeeder SWBD-1 480V 3ph\n  wire 14 AWG\n");
+        var mcc = Path.Combine(plant, "mcc1.motors");
+        File.WriteAllText(mcc, "feeder MCC-1 480V 3ph\n  from SWBD-1\n  motor M-1 10hp\n  motor M-2 10hp\n");
+        // Alone the switchboard has no load: nothing would tell it its wire is too small.
+        var alone = Path.Combine(_dir, "alone.motors");
+        File.Copy(swbd, alone);
+        Assert.DoesNotContain("M107", Run("check", alone).Out);
+        var (code, _, err) = Run("size", mcc);
+        Assert.Equal(0, code);
+        Assert.Contains("swbd.motors: sized", err);
+        // hand calculation, NFPA 70-2023 430.24 with Table 430.250 (14 A at 460 V): 1.25 x 14 + 14 = 31.5 A;
+        // 14 AWG is too small, and the wire written is no longer 14 AWG.
+        Assert.DoesNotContain("wire 14 AWG", File.ReadAllText(swbd));
+        Assert.DoesNotContain("M107", Run("check", mcc).Out);
+    }
+
+    [Fact]
+    public void ScheduleOfAPlantPrintsEveryFileAndAPlantSummary()
+    {
+        var plant = Path.Combine(_dir, "sched");
+        Directory.CreateDirectory(plant);
+        File.WriteAllText(Path.Combine(plant, "swbd.motors"), "project \"P\"\n  plant\nfeeder SWBD-1 480V 3ph\n");
+        File.WriteAllText(Path.Combine(plant, "mcc1.motors"), "feeder MCC-1 480V 3ph\n  from SWBD-1\n  motor M-1 10hp\n");
+        File.WriteAllText(Path.Combine(plant, "mcc2.motors"), "feeder MCC-2 480V 3ph\n  from SWBD-1\n  motor M-2 10hp\n");
+        var (_, output, _) = Run("schedule", "--format", "markdown", Path.Combine(plant, "mcc2.motors"));
+        Assert.Equal(["swbd.motors", "mcc1.motors", "mcc2.motors"], output.Split('\n').Where(l => l.StartsWith("## ")).Select(l => l[3..]));
+        Assert.Contains("3 files, 2 motors, 3 feeders", output);
+        // The switchboard's totals count both MCCs: 10 hp at 460 V is 14 A (NFPA 70-2023 Table 430.250);
+        // hand calculation, 430.24: 1.25 x 14 + 14 = 31.5 A required.
+        Assert.Contains(output.Split('\n'), l => l.StartsWith("| SWBD-1 |") && l.Contains("31.5 A"));
+        Assert.NotEqual(0, Run("schedule", "--format", "json", Path.Combine(plant, "mcc2.motors")).Code);
+    }
+
+    [Fact]
     public void CheckOfACleanFileExitsZero()
     {
         // Information findings (sizes not written yet) do not fail a check.
