@@ -214,9 +214,7 @@ public sealed class LanguageServerTarget
     {
         var settings = _presentation;
         if (!settings.InlayFlc && !settings.InlayWire) return [];
-        return s.Analysis.Motors.Values
-            .Where(m => m.Motor.Header.Line.Index >= p.Range.Start.Line && m.Motor.Header.Line.Index <= p.Range.End.Line)
-            .OrderBy(m => m.Motor.Header.Line.Index)
+        return Breakdown.MotorsOnLines(s.Analysis, p.Range.Start.Line, p.Range.End.Line)
             .Select(m => (m, label: Breakdown.InlaySummary(m, settings.InlayFlc, settings.InlayWire)))
             .Where(x => x.label is not null)
             .Select(x => new InlayHint(new Position(x.m.Motor.Header.Line.Index, x.m.Motor.Header.Line.Length), x.label!, null, true))

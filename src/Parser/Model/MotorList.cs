@@ -54,6 +54,38 @@ public sealed class MotorList
         return (BlockNode?)Find(feeder.Motors, line) ?? (BlockNode?)Find(feeder.Loads, line) ?? feeder;
     }
 
+    /// <summary>
+    /// The motors whose header lines lie between <paramref name="first"/> and <paramref name="last"/>
+    /// (inclusive), in line order: a binary search to the first feeder that can hold one, then only
+    /// the blocks in the range, so a visible window costs the same in a short list and a long one.
+    /// </summary>
+    public IEnumerable<MotorNode> MotorsBetween(int first, int last)
+    {
+        var start = StartOf(Feeders, first);
+        for (var i = start; i < Feeders.Count && Feeders[i].Header.Line.Index <= last; i++)
+        {
+            var motors = Feeders[i].Motors;
+            for (var j = StartOf(motors, first); j < motors.Count && motors[j].Header.Line.Index <= last; j++)
+            {
+                if (motors[j].Header.Line.Index >= first) yield return motors[j];
+            }
+        }
+    }
+
+    /// <summary>The index of the first block that ends at or after <paramref name="line"/> (blocks are ordered and do not overlap).</summary>
+    private static int StartOf<T>(IReadOnlyList<T> blocks, int line) where T : BlockNode
+    {
+        int lo = 0, hi = blocks.Count;
+        while (lo < hi)
+        {
+            var mid = (lo + hi) / 2;
+            if (blocks[mid].LastLine < line) lo = mid + 1;
+            else hi = mid;
+        }
+
+        return lo;
+    }
+
     private static T? Find<T>(IReadOnlyList<T> blocks, int line) where T : BlockNode
     {
         int lo = 0, hi = blocks.Count - 1, found = -1;
