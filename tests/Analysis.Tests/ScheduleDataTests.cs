@@ -13,13 +13,24 @@ public class ScheduleDataTests
     }
 
     [Fact]
+    public void TitleBlockIsTakenFromTheProjectBlockAsWritten()
+    {
+        var data = ScheduleDataBuilder.Of(Analyzer.Analyze(Example("dairy-bottling.motors")));
+        Assert.Equal(new TitleBlock("Pinecrest Dairy Co-op - Bottling Hall", "PDC-2611", "B", "2026-12-03", "M. Halvorsen", "T. Adeyemi"), data.Title);
+
+        // Unwritten lines stay null (the report prints nothing for them, never a placeholder).
+        var bare = ScheduleDataBuilder.Of(Analyzer.Analyze("project \"Shed\"\n  revision \"0\"\nfeeder F-1 480V 3ph\n"));
+        Assert.Equal(new TitleBlock("Shed", null, "0", null, null, null), bare.Title);
+    }
+
+    [Fact]
     public void DairyMotorRowHoldsNumbersWithUnits()
     {
         var data = ScheduleDataBuilder.Of(Analyzer.Analyze(Example("dairy-bottling.motors")), "dairy.motors");
         Assert.Equal(ScheduleData.CurrentFormatVersion, data.FormatVersion);
         Assert.Equal("Pinecrest Dairy Co-op - Bottling Hall", data.Title.Project);
         var p = data.Motors.Single(m => m.Tag == "P-101");
-        Assert.Equal(("dairy.motors", 18, "MCC-B1"), (p.File, p.Line, p.Feeder));
+        Assert.Equal(("dairy.motors", 23, "MCC-B1"), (p.File, p.Line, p.Feeder));
         // P-101, 15 hp 480 V 3ph: NFPA 70-2023 Table 430.250 -> 21 A; 430.22: 1.25 x 21 = 26.25 A (hand calculation).
         Assert.Equal(new Measure(15, "hp"), p.Power);
         Assert.Equal(new Measure(21, "A"), p.FullLoadCurrent);
@@ -33,9 +44,9 @@ public class ScheduleDataTests
         Assert.Equal((new Measure(90, "ft"), "10 AWG", "ok"), (p.Length, p.Wire, p.Status));
         Assert.Empty(p.Findings);
         var feeder = data.Feeders.Single();
-        // 430.24 for MCC-B1 (hand calculation in ExampleScheduleTests): 179.17 A required. The feeder header is line 12; five motor lines under it.
+        // 430.24 for MCC-B1 (hand calculation in ExampleScheduleTests): 179.17 A required. The feeder header is line 17; five motor lines under it.
         Assert.Equal(179.1718m, Assert.NotNull(feeder.RequiredAmpacity).Value, 2);
-        Assert.Equal((12, 5, "inverse-time-breaker"), (feeder.Line, feeder.MotorCount, feeder.ProtectionDevice));
+        Assert.Equal((17, 5, "inverse-time-breaker"), (feeder.Line, feeder.MotorCount, feeder.ProtectionDevice));
     }
 
     [Fact]

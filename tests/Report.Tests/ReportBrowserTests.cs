@@ -78,6 +78,17 @@ public sealed partial class ReportBrowserTests(ChromiumFixture chromium) : IAsyn
         var feeders = await page.EvaluateExpressionAsync<string[]>("[...document.querySelectorAll('table.feeders tr.feeder')].map(r => r.dataset.tag)");
         Assert.Equal(_json["feeders"]!.AsArray().Select(f => (string)f!["tag"]!).ToArray(), feeders);
 
+        // Every sheet's heading shows the list's title block as the JSON schedule carries it.
+        var title = _json["title"]!;
+        var headings = await page.EvaluateExpressionAsync<string[]>("[...document.querySelectorAll('header.titleblock')].map(h => h.innerText)");
+        Assert.NotEmpty(headings);
+        foreach (var field in new[] { "number", "revision", "date", "preparedBy", "checkedBy" })
+        {
+            var written = (string?)title[field];
+            Assert.False(string.IsNullOrEmpty(written), $"the example writes no {field}");
+            Assert.All(headings, h => Assert.Contains(written!, h));
+        }
+
         var shot = Path.Combine(Plants.ArtifactFolder(), "report-dairy-bottling.png");
         await page.ScreenshotAsync(shot, new ScreenshotOptions { FullPage = true });
         Assert.True(new FileInfo(shot).Length > 10_000);

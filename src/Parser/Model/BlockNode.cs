@@ -112,6 +112,13 @@ public sealed class ProjectNode(Statement header) : BlockNode(header, null)
 {
     public Located<string>? Name => Get<string>("project", "name");
 
+    // The title block, as written (free text; printed on schedules and reports).
+    public Located<string>? JobNumber => Get<string>("job-number", "number");
+    public Located<string>? Revision => Get<string>("revision", "revision");
+    public Located<string>? Dated => Get<string>("dated", "date");
+    public Located<string>? PreparedBy => Get<string>("prepared-by", "name");
+    public Located<string>? CheckedBy => Get<string>("checked-by", "name");
+
     /// <summary>Written 'plant': the project spans every motor list in its file's folder and below (docs/format.md, Plants).</summary>
     public Statement? Plant => Statement("plant");
 }

@@ -162,6 +162,12 @@ public static class Keywords
 
         new("plant", [Project], null, [],
             "This project is a plant: every .motors file in this file's folder and the folders below it is analysed together with it."),
+        // The title block of issued deliverables (schedule, report): free text, printed as written.
+        new("job-number", [Project], null, [new("number", ArgKind.Text, true)], "Title block: the project or job number the deliverables are filed under."),
+        new("revision", [Project], null, [new("revision", ArgKind.Text, true)], "Title block: the revision of the motor list, as issued (\"A\", \"2\", \"IFC-1\")."),
+        new("dated", [Project], null, [new("date", ArgKind.Text, true)], "Title block: the date of this revision, as printed (ISO 8601, \"2026-12-03\", reads the same everywhere)."),
+        new("prepared-by", [Project], null, [new("name", ArgKind.Text, true)], "Title block: who prepared this revision."),
+        new("checked-by", [Project], null, [new("name", ArgKind.Text, true)], "Title block: the qualified person who checked it."),
         new("code", [Project, Feeder], null, [new("edition", Word, true, Editions)], "The code edition the file is checked against."),
         new("ambient", Settings, null, [new("temperature", Temperature, true)], "Ambient temperature for conductor correction (Table 310.15(B)(1)(1))."),
         new("conductor", Settings, null,

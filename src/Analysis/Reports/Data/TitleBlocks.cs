@@ -8,6 +8,7 @@ internal static class TitleBlocks
     public static TitleBlock Of(MotorList model)
     {
         var project = model.Project;
-        return new TitleBlock(project?.Name?.Value, null, null, null, null, null);
+        return new TitleBlock(project?.Name?.Value, project?.JobNumber?.Value, project?.Revision?.Value, project?.Dated?.Value,
+            project?.PreparedBy?.Value, project?.CheckedBy?.Value);
     }
 }
