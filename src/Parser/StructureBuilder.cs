@@ -57,6 +57,12 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
 
     private void Place(SyntaxLine line)
     {
+        if (line.IndentHasTab)
+        {
+            PlaceTabbed(line);
+            return;
+        }
+
         var indent = line.IndentWidth;
         while (_stack.Count > 1 && indent <= _stack[^1].HeaderIndent) _stack.RemoveAt(_stack.Count - 1);
         var parent = _stack[^1];
@@ -81,13 +87,7 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
             return;
         }
 
-        if (line.IndentHasTab)
-        {
-            Error(SyntaxCodes.TabIndentation, SourceRange.OnLine(line.Index, 0, indent),
-                "tabs are not allowed in indentation; indent with spaces (two per level)");
-            line.IsBroken = true;
-        }
-        else if (parent.ChildIndent is null)
+        if (parent.ChildIndent is null)
         {
             parent.ChildIndent = indent;
             if (parent.Node is not null) parent.Node.ChildIndent = indent;
@@ -102,6 +102,61 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
             Error(SyntaxCodes.BadIndentation, SourceRange.OnLine(line.Index, 0, Math.Max(indent, 1)), message);
         }
 
+        Read(line, spec, parent, indent);
+    }
+
+    /// <summary>
+    /// A tab-indented line has no width that can be compared with the spaces around it, so its
+    /// indentation neither closes nor sets a block: it is reported once (P006) and read into the
+    /// innermost open block where its keyword belongs, as if it were indented like that block's
+    /// other lines. The blocks around it stay as they were, so one tab costs one message, and the
+    /// line is kept as written (it has a diagnostic, so the formatter leaves it).
+    /// </summary>
+    private void PlaceTabbed(SyntaxLine line)
+    {
+        Error(SyntaxCodes.TabIndentation, SourceRange.OnLine(line.Index, 0, line.IndentWidth),
+            "tabs are not allowed in indentation; indent with spaces (two per level)");
+        line.IsBroken = true;
+        if (_stack[^1].Broken) return;
+
+        var first = line.Tokens[0];
+        var spec = first.Kind == TokenKind.Word ? Keywords.Find(first.Text) : null;
+        var home = _stack.Count - 1;
+        if (spec is not null)
+        {
+            while (home > 0 && !spec.AllowedIn.Contains(_stack[home].Kind) && !_stack[home].Broken) home--;
+        }
+
+        // No block open here takes the keyword (or it is unknown): read it where it stands, so it is
+        // reported as misplaced or unknown, and hide the lines under it as any unreadable header does.
+        if (spec is null || _stack[home].Broken || !spec.AllowedIn.Contains(_stack[home].Kind))
+        {
+            var parent = _stack[^1];
+            if (spec is null)
+            {
+                var allowed = Keywords.AllowedIn(parent.Kind).Select(k => k.Keyword);
+                Error(SyntaxCodes.UnknownKeyword, first.Range, first.Kind == TokenKind.String
+                    ? "a line must start with a keyword; a description goes after the tag"
+                    : $"unknown keyword '{first.Text}'{Suggestions.DidYouMean(first.Text, allowed)}");
+            }
+            else if (!_stack[home].Broken)
+            {
+                Error(SyntaxCodes.MisplacedStatement, first.Range, Misplaced(spec, parent.Kind));
+            }
+
+            return;
+        }
+
+        _stack.RemoveRange(home + 1, _stack.Count - home - 1);
+        var block = _stack[home];
+        var indent = block.ChildIndent ?? block.HeaderIndent + 2;
+        Read(line, spec, block, indent);
+    }
+
+    /// <summary>Reads a placed line's statement into its block, opening a block for a header.</summary>
+    private void Read(SyntaxLine line, KeywordSpec spec, Block parent, int indent)
+    {
+        var first = line.Tokens[0];
         if (!spec.AllowedIn.Contains(parent.Kind))
         {
             Error(SyntaxCodes.MisplacedStatement, first.Range, Misplaced(spec, parent.Kind));

@@ -184,6 +184,20 @@ public class StatementTests
         Assert.Equal([code], DocumentParser.Parse(Lines(Feeder, "  motor P-1 15hp", line)).Diagnostics.Select(d => d.Code));
     }
 
+    [Theory]
+    [InlineData("    nameplate 20 amps", "3:15-3:22", "'20 amps': write the unit as its symbol, '20A'")]
+    [InlineData("    nameplate 20amps", "3:15-3:21", "'20amps': write the unit as its symbol, '20A'")]
+    [InlineData("    nameplate 20 Amperes", "3:15-3:25", "'20 Amperes': write the unit as its symbol, '20A'")]
+    [InlineData("    length 90 feet", "3:12-3:19", "'90 feet': write the unit as its symbol, '90ft'")]
+    public void AUnitWrittenOutGivesOneMessageWithItsSymbol(string line, string span, string message)
+    {
+        // Before: '20' needs a unit (P003) and then 'amps' was unexpected (P010), two messages for one mistake.
+        var d = DocumentParser.Parse(Lines(Feeder, "  motor P-1 15hp", line)).Diagnostics.Single();
+        Assert.Equal("P003", d.Code);
+        Assert.Equal(span + " P003", Describe(d));
+        Assert.StartsWith(message, d.Message);
+    }
+
     [Fact]
     public void HashTenHintsThatTheHashStartsAComment()
     {

@@ -43,6 +43,37 @@ public class StructureTests
     }
 
     [Fact]
+    public void ATabIndentedLineInAMotorGivesOneMessageAndKeepsTheMotorWhole()
+    {
+        // Before: the tab's width (1) closed the motor, and every line after it was misplaced in the feeder.
+        var r = DocumentParser.Parse(Lines(
+            "feeder A 480V 3ph", "  wire 3/0 AWG", "  motor P-101 15hp", "\tnameplate 18.5A",
+            "    service-factor 1.15", "    design B", "    wire 10 AWG", "  motor P-102 10hp", "    nameplate 14A"));
+        Assert.Equal(["4:1-4:2 P006"], r.Diagnostics.Select(Describe));
+        var p101 = r.Model.Motors.Single(m => m.Tag!.Value == "P-101");
+        Assert.Equal(18.5m, p101.Nameplate!.Value.Value);
+        Assert.NotNull(p101.Wire);
+        Assert.Equal(["P-101", "P-102"], r.Model.Motors.Select(m => m.Tag!.Value));
+        Assert.Equal(2, r.Model.Feeders.Single().Motors.Count);
+    }
+
+    [Fact]
+    public void ATabIndentedHeaderOpensItsBlockWhereItBelongs()
+    {
+        var r = DocumentParser.Parse(Lines(
+            "feeder A 480V 3ph", "  motor M1 5hp", "    nameplate 7A", "\tmotor M2 3hp", "    nameplate 4.8A"));
+        Assert.Equal(["4:1-4:2 P006"], r.Diagnostics.Select(Describe));
+        Assert.Equal(4.8m, r.Model.Motors.Single(m => m.Tag!.Value == "M2").Nameplate!.Value.Value);
+        Assert.Equal(7m, r.Model.Motors.Single(m => m.Tag!.Value == "M1").Nameplate!.Value.Value);
+    }
+
+    [Fact]
+    public void ATabIndentedLineThatBelongsNowhereOpenIsStillReported()
+    {
+        Assert.Equal(["2:1-2:2 P006", "2:2-2:11 P012"], Codes(Lines("project \"x\"", "\tnameplate 7A")));
+    }
+
+    [Fact]
     public void AnUnknownHeaderHidesItsChildrenInsteadOfFloodingDiagnostics()
     {
         var r = DocumentParser.Parse(Lines("feeder A 480V 3ph", "  moter M1 5hp", "    nameplate 7A", "    wire 10 AWG", "  motor M2 3hp"));

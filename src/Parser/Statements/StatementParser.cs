@@ -165,6 +165,11 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
             case LexicalValue.Number n when n.Unit is Unit.Awg or Unit.Kcmil:
                 return PlaceWire(spec, filled, item, 1, n);
 
+            case LexicalValue.Number n when n.UnitText.Length > 0 && n.Unit == Unit.None && Units.TryParseWrittenOut(n.UnitText, out var named):
+                Error(SyntaxCodes.BadUnit, item.Range,
+                    $"'{item.Text}': write the unit as its symbol, '{n.Digits}{Units.Canonical(named)}'{ExpectedSuffix(spec, filled)}");
+                return -1;
+
             case LexicalValue.Number n when n.UnitText.Length > 0 && n.Unit == Unit.None:
                 Error(SyntaxCodes.BadUnit, item.Range, $"unknown unit '{n.UnitText}' in '{item.Text}'{ExpectedSuffix(spec, filled)}");
                 return -1;
@@ -324,6 +329,14 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
             if (v is LexicalValue.Number { UnitText: "" } bare && hasNext && Units.TryParse(nextWord.Text, out var unit))
             {
                 items.Add(new Item(t, nextWord, bare with { Unit = unit, UnitText = nextWord.Text }));
+                i++;
+                continue;
+            }
+
+            // "20 amps": one value with a unit the format does not accept, reported once with its symbol.
+            if (v is LexicalValue.Number { UnitText: "" } spelled && hasNext && Units.TryParseWrittenOut(nextWord.Text, out _))
+            {
+                items.Add(new Item(t, nextWord, spelled with { UnitText = nextWord.Text }));
                 i++;
                 continue;
             }

@@ -15,6 +15,21 @@ public static class Units
 
     public static bool TryParse(string text, out Unit unit) => Spellings.TryGetValue(text, out unit);
 
+    // Units written out as words are not accepted (one spelling per unit keeps lists diffable),
+    // but they are recognised so the message can say which symbol to write.
+    private static readonly Dictionary<string, Unit> WrittenOut = new(StringComparer.OrdinalIgnoreCase)
+    {
+        ["amp"] = Unit.Amp, ["amps"] = Unit.Amp, ["ampere"] = Unit.Amp, ["amperes"] = Unit.Amp,
+        ["volt"] = Unit.Volt, ["volts"] = Unit.Volt, ["horsepower"] = Unit.Hp,
+        ["kilowatt"] = Unit.Kw, ["kilowatts"] = Unit.Kw, ["foot"] = Unit.Foot, ["feet"] = Unit.Foot,
+        ["metre"] = Unit.Metre, ["metres"] = Unit.Metre, ["meter"] = Unit.Metre, ["meters"] = Unit.Metre,
+        ["percent"] = Unit.Percent, ["minute"] = Unit.Minute, ["minutes"] = Unit.Minute,
+        ["phase"] = Unit.Phase, ["inch"] = Unit.Inch, ["inches"] = Unit.Inch,
+    };
+
+    /// <summary>A unit written out as a word ("amps", "volts"): the unit it names, so a message can give its symbol.</summary>
+    public static bool TryParseWrittenOut(string text, out Unit unit) => WrittenOut.TryGetValue(text, out unit);
+
     public static string Canonical(Unit unit) => unit switch
     {
         Unit.Hp => "hp", Unit.Kw => "kW", Unit.Volt => "V", Unit.Amp => "A", Unit.Foot => "ft", Unit.Metre => "m",
