@@ -38,7 +38,7 @@ public static class CheckCommand
                     stdout.WriteLine(JsonReport.Write(reports, acknowledged).ToJsonString(JsonReport.Options));
                     break;
                 case "sarif":
-                    stdout.WriteLine(SarifReport.Write(reports, typeof(CheckCommand).Assembly.GetName().Version?.ToString() ?? "0", acknowledged).ToJsonString(JsonReport.Options));
+                    stdout.WriteLine(SarifReport.Write(reports, ToolVersion.Text, acknowledged, ToolVersion.DocsBase).ToJsonString(JsonReport.Options));
                     break;
                 default:
                     foreach (var (file, findings) in reports)

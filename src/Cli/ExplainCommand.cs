@@ -22,8 +22,7 @@ public static class ExplainCommand
             }
 
             stdout.WriteLine($"{entry.Code} ({entry.Source})");
-            foreach (var (heading, text) in entry.Fields.Where(f => f.Text is not ("" or "—")))
-                stdout.WriteLine($"{heading}: {text}");
+            foreach (var line in entry.Lines) stdout.WriteLine(line);
             return ExitCodes.Clean;
         });
         return command;

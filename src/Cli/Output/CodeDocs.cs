@@ -9,7 +9,15 @@ namespace MotorLang.Cli.Output;
 /// </summary>
 public static class CodeDocs
 {
-    public sealed record Entry(string Code, string Source, IReadOnlyList<(string Heading, string Text)> Fields);
+    /// <summary>One code's row; <paramref name="Anchor"/> is the GitHub anchor of the section the row is in.</summary>
+    public sealed record Entry(string Code, string Source, string Anchor, IReadOnlyList<(string Heading, string Text)> Fields)
+    {
+        /// <summary>What the code means: the row's "What it means" (checks.md) or "Meaning" (format.md) cell.</summary>
+        public string Meaning => Fields.FirstOrDefault(f => f.Heading is "What it means" or "Meaning").Text ?? "";
+
+        /// <summary>The row as `explain` prints it, one "Heading: text" line per filled cell.</summary>
+        public IEnumerable<string> Lines => Fields.Where(f => f.Text is not ("" or "—")).Select(f => $"{f.Heading}: {f.Text}");
+    }
 
     private static readonly Lazy<List<Entry>> All = new(() => [.. Parse("checks.md"), .. Parse("format.md")]);
 
@@ -28,8 +36,10 @@ public static class CodeDocs
     private static IEnumerable<Entry> Parse(string name)
     {
         string[]? header = null;
+        var section = "";
         foreach (var line in Resource(name).Split('\n').Select(l => l.TrimEnd('\r')))
         {
+            if (line.StartsWith('#')) section = Slug(line.TrimStart('#').Trim());
             if (!line.StartsWith('|'))
             {
                 header = null;
@@ -45,9 +55,16 @@ public static class CodeDocs
 
             if (cells.Length == 0 || !IsCode(cells[0])) continue;
             var fields = cells.Skip(1).Select((text, i) => (Heading: i + 1 < header.Length ? header[i + 1] : "", Text: text)).ToList();
-            yield return new Entry(cells[0], "docs/" + name, fields);
+            yield return new Entry(cells[0], "docs/" + name, section, fields);
         }
     }
+
+    /// <summary>
+    /// The anchor GitHub gives a heading: lower case, letters, digits, spaces, hyphens and
+    /// underscores kept, every other character dropped, spaces made hyphens.
+    /// </summary>
+    public static string Slug(string heading) =>
+        new string(heading.ToLowerInvariant().Where(c => char.IsLetterOrDigit(c) || c is ' ' or '-' or '_').ToArray()).Replace(' ', '-');
 
     /// <summary>Splits a Markdown table row on unescaped pipes.</summary>
     private static string[] Cells(string row)

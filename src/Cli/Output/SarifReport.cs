@@ -18,7 +18,7 @@ public static class SarifReport
     /// code-scanning tools show them as dismissed with why.
     /// </summary>
     public static JsonObject Write(IReadOnlyList<(string File, IReadOnlyList<Finding> Findings)> files, string toolVersion,
-        IReadOnlyDictionary<string, IReadOnlyList<Acknowledgement>>? acknowledged = null)
+        IReadOnlyDictionary<string, IReadOnlyList<Acknowledgement>>? acknowledged = null, Uri? docsBase = null)
     {
         var all = files.SelectMany(f => f.Findings.Select(x => (f.File, Finding: x, Reason: (string?)null))
             .Concat((acknowledged?.GetValueOrDefault(f.File) ?? []).Select(a => (f.File, a.Finding, Reason: (string?)a.Reason)))).ToList();
@@ -35,11 +35,7 @@ public static class SarifReport
                     {
                         ["name"] = "motorlang",
                         ["version"] = toolVersion,
-                        ["rules"] = new JsonArray(rules.Select(r => (JsonNode)new JsonObject
-                        {
-                            ["id"] = r,
-                            ["shortDescription"] = new JsonObject { ["text"] = RuleText(r) },
-                        }).ToArray()),
+                        ["rules"] = new JsonArray(rules.Select(r => (JsonNode)Rule(r, docsBase)).ToArray()),
                     },
                 },
                 ["columnKind"] = "utf16CodeUnits",
@@ -78,5 +74,41 @@ public static class SarifReport
         }),
     };
 
-    private static string RuleText(string code) => code[0] == 'P' ? "motor-list syntax or structure problem" : "motor-circuit sizing check (see docs/checks.md)";
+    /// <summary>
+    /// A rule's texts come from the same table rows `explain` prints (docs/checks.md, docs/format.md,
+    /// embedded at build): the short description is the meaning's first sentence, the full one the
+    /// whole meaning, the help every filled cell. The help link is the row's section in the
+    /// published docs, when the build names where they are published.
+    /// </summary>
+    private static JsonObject Rule(string code, Uri? docsBase)
+    {
+        var rule = new JsonObject { ["id"] = code };
+        if (CodeDocs.Find(code) is not { } entry)
+        {
+            rule["shortDescription"] = new JsonObject { ["text"] = code[0] == 'P' ? "motor-list syntax or structure problem" : "motor-circuit sizing check" };
+            return rule;
+        }
+
+        rule["shortDescription"] = new JsonObject { ["text"] = FirstSentence(entry.Meaning) };
+        rule["fullDescription"] = new JsonObject { ["text"] = entry.Meaning };
+        rule["help"] = new JsonObject { ["text"] = string.Join("\n", [.. entry.Lines, $"See {HelpPath(entry)}."]) };
+        if (docsBase is not null) rule["helpUri"] = new Uri(docsBase, HelpPath(entry)["docs/".Length..]).AbsoluteUri;
+        return rule;
+    }
+
+    /// <summary>The entry's section, relative to the repository root ("docs/checks.md#checks").</summary>
+    public static string HelpPath(CodeDocs.Entry entry) => $"{entry.Source}#{entry.Anchor}";
+
+    private static string FirstSentence(string text)
+    {
+        // A sentence ends at ". " followed by a capital or a backtick, not at "No. 1" or "e.g. a".
+        for (var i = 0; i + 2 < text.Length; i++)
+        {
+            if (text[i] == '.' && text[i + 1] == ' ' && (char.IsUpper(text[i + 2]) || text[i + 2] == '`')
+                && !text.AsSpan(0, i).EndsWith("No", StringComparison.Ordinal) && !text.AsSpan(0, i).EndsWith("Exc", StringComparison.Ordinal))
+                return text[..(i + 1)];
+        }
+
+        return text;
+    }
 }
