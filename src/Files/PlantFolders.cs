@@ -7,7 +7,11 @@ public sealed record PlantMember(string Path, string Name, string Text);
 /// The files of a plant, read: the plant file first, then every other in ordinal order of name;
 /// and what was passed over under the plant's folder, with the reason.
 /// </summary>
-public sealed record PlantFolder(string Root, IReadOnlyList<PlantMember> Members, IReadOnlyList<Skipped> LeftOut);
+public sealed record PlantFolder(string Root, IReadOnlyList<PlantMember> Members, IReadOnlyList<Skipped> LeftOut)
+{
+    /// <summary>A path under the plant's folder as the plant names it: relative to the folder, with '/'.</summary>
+    public string NameOf(string path) => Path.GetRelativePath(Root, path).Replace(Path.DirectorySeparatorChar, '/');
+}
 
 /// <summary>
 /// How a plant is delimited on disk (docs/format.md, Plants): a plant is the folder holding a plant
@@ -29,11 +33,22 @@ public static class PlantFolders
     /// lists directly in each of those folders are read, to find a plant file. The answer depends
     /// on the tree alone (not on the current folder), so the editor and the command line agree.
     /// </summary>
-    public static PlantFolder? ForFile(string file, string extension, Func<string, bool> isPlantFile)
+    public static PlantFolder? ForFile(string file, string extension, Func<string, bool> isPlantFile) =>
+        ForFile(file, extension, new DiskSource(isPlantFile));
+
+    /// <summary>The same, with texts and the plant-file test taken from <paramref name="source"/> (the server's open buffers over the disk).</summary>
+    public static PlantFolder? ForFile(string file, string extension, IListSource source, CancellationToken ct = default) =>
+        RootFor(file, extension, source) is { } root ? Load(root, extension, source, ct) : null;
+
+    /// <summary>
+    /// The folder of the plant <paramref name="file"/> would belong to by the upward search of
+    /// <see cref="ForFile(string, string, Func{string, bool})"/>, without reading the plant; null when none.
+    /// </summary>
+    public static string? RootFor(string file, string extension, IListSource source)
     {
         for (var dir = Path.GetDirectoryName(Path.GetFullPath(file)); dir is not null; dir = Path.GetDirectoryName(dir))
         {
-            if (PlantFileIn(dir, extension, isPlantFile) is not null) return Load(dir, extension, isPlantFile);
+            if (PlantFileIn(dir, extension, source) is not null) return dir;
             if (Path.Exists(Path.Combine(dir, ".git"))) break;
         }
 
@@ -41,7 +56,11 @@ public static class PlantFolders
     }
 
     /// <summary>The first plant file (in ordinal order) directly in <paramref name="folder"/>, or null.</summary>
-    public static string? PlantFileIn(string folder, string extension, Func<string, bool> isPlantFile)
+    public static string? PlantFileIn(string folder, string extension, Func<string, bool> isPlantFile) =>
+        PlantFileIn(folder, extension, new DiskSource(isPlantFile));
+
+    /// <summary>The first plant file (in ordinal order) directly in <paramref name="folder"/> by <paramref name="source"/>'s test, or null.</summary>
+    public static string? PlantFileIn(string folder, string extension, IListSource source)
     {
         string[] entries;
         try
@@ -57,26 +76,20 @@ public static class PlantFolders
         foreach (var entry in entries)
         {
             if (!entry.EndsWith(extension, StringComparison.Ordinal) || FileSearch.Status(entry) is not { Kind: FileKind.Regular }) continue;
-            string text;
-            try
-            {
-                text = SafeReader.ReadText(entry);
-            }
-            catch (FileRefusedException)
-            {
-                continue;
-            }
-
-            if (isPlantFile(text)) return entry;
+            if (source.IsPlantFile(entry)) return entry;
         }
 
         return null;
     }
 
     /// <summary>Reads the plant whose folder is <paramref name="root"/> (a folder holding a plant file).</summary>
-    public static PlantFolder Load(string root, string extension, Func<string, bool> isPlantFile, CancellationToken ct = default)
+    public static PlantFolder Load(string root, string extension, Func<string, bool> isPlantFile, CancellationToken ct = default) =>
+        Load(root, extension, new DiskSource(isPlantFile), ct);
+
+    /// <summary>The same, with texts and the plant-file test taken from <paramref name="source"/>.</summary>
+    public static PlantFolder Load(string root, string extension, IListSource source, CancellationToken ct = default)
     {
-        var marker = PlantFileIn(root, extension, isPlantFile);
+        var marker = PlantFileIn(root, extension, source);
         var found = FileSearch.Find(root, extension, stayInside: true, LeavesFolder, ct);
         var leftOut = new List<Skipped>(found.Skipped);
         var nested = new Dictionary<string, bool>(StringComparer.Ordinal);
@@ -84,11 +97,11 @@ public static class PlantFolders
         var rootFull = Path.TrimEndingDirectorySeparator(Path.GetFullPath(root));
         foreach (var path in found.Files)
         {
-            if (BelowNestedPlant(path, rootFull, extension, isPlantFile, nested)) continue;
+            if (BelowNestedPlant(path, rootFull, extension, source, nested)) continue;
             var name = Path.GetRelativePath(rootFull, Path.GetFullPath(path)).Replace(Path.DirectorySeparatorChar, '/');
             try
             {
-                members.Add(new PlantMember(path, name, SafeReader.ReadText(path)));
+                members.Add(new PlantMember(path, name, source.Read(path)));
             }
             catch (FileRefusedException e)
             {
@@ -108,12 +121,12 @@ public static class PlantFolders
         return new PlantFolder(root, members, leftOut);
     }
 
-    private static bool BelowNestedPlant(string path, string root, string extension, Func<string, bool> isPlantFile, Dictionary<string, bool> cache)
+    private static bool BelowNestedPlant(string path, string root, string extension, IListSource source, Dictionary<string, bool> cache)
     {
         for (var dir = Path.GetDirectoryName(Path.GetFullPath(path)); dir is not null && !string.Equals(dir, root, StringComparison.Ordinal) && Inside(dir, root);
              dir = Path.GetDirectoryName(dir))
         {
-            if (!cache.TryGetValue(dir, out var isPlant)) cache[dir] = isPlant = PlantFileIn(dir, extension, isPlantFile) is not null;
+            if (!cache.TryGetValue(dir, out var isPlant)) cache[dir] = isPlant = PlantFileIn(dir, extension, source) is not null;
             if (isPlant) return true;
         }
 

@@ -5,6 +5,7 @@ using MotorLang.Parser.Formatting;
 using MotorLang.Parser.Text;
 using MotorLang.Server.Documents;
 using MotorLang.Server.Features;
+using MotorLang.Server.Plants;
 using MotorLang.Server.Protocol;
 using MotorLang.Server.Transport;
 using StreamJsonRpc;
@@ -23,6 +24,7 @@ public sealed class LanguageServerTarget
 {
     private const string Single = "";
     private readonly DocumentStore _store = new();
+    private readonly PlantService _plants;
     private readonly DiagnosticScheduler _diagnostics;
     private readonly WorkspaceIndex _workspace;
     private readonly ServerLog _log;
@@ -34,17 +36,24 @@ public sealed class LanguageServerTarget
     /// <summary>Whether the client asks for a code action's edit only when the user picks it (codeAction/resolve).</summary>
     private bool _resolvesEdits;
 
+    /// <summary>Whether the client lets the server ask it to watch *.motors files (for the plants' closed files).</summary>
+    private bool _watchesFiles;
+
+    private readonly JsonRpc _rpc;
+
     internal LanguageServerTarget(JsonRpc rpc, ServerLog log, ProtocolLifecycle lifecycle, TimeSpan debounce)
     {
         _log = log;
+        _rpc = rpc;
         _lifecycle = lifecycle;
         _workspace = new WorkspaceIndex(_store);
+        _plants = new PlantService(_store);
         _trimmer = new MemoryTrimmer(TimeSpan.FromSeconds(2), 48L << 20, m => _log.Info(m));
         _diagnostics = new DiagnosticScheduler(p =>
         {
             _trimmer.Touch();
             return rpc.NotifyWithParameterObjectAsync("textDocument/publishDiagnostics", p);
-        }, debounce, m => _log.Error(m));
+        }, debounce, m => _log.Error(m), AnalyseForDiagnostics, ReanalyseIfOpen);
     }
 
     /// <summary>Completes with the process exit code once 'exit' arrives or the client process dies.</summary>
@@ -58,6 +67,7 @@ public sealed class LanguageServerTarget
         _workspace.SetRoot(p.RootUri);
         _presentation = PresentationSettings.From(p.InitializationOptions);
         _resolvesEdits = ClientCapabilities.ResolvesCodeActionEdits(p.Capabilities);
+        _watchesFiles = ClientCapabilities.RegistersFileWatchers(p.Capabilities);
         if (p.ProcessId is { } pid) WatchClient(pid);
         _log.Info($"initialize from {p.ClientInfo?.Name ?? "unknown client"} (process {p.ProcessId?.ToString() ?? "none"})");
         var version = typeof(LanguageServerTarget).Assembly.GetName().Version?.ToString() ?? "0";
@@ -84,6 +94,21 @@ public sealed class LanguageServerTarget
     [JsonRpcMethod("initialized")]
     public void Initialized()
     {
+        if (!_watchesFiles) return;
+        // A plant's closed files are read from disk: ask the client to say when any list changes there.
+        var registration = new { registrations = new[] { new { id = "motorlang-watch-lists", method = "workspace/didChangeWatchedFiles",
+            registerOptions = new { watchers = new[] { new { globPattern = "**/*" + PlantService.Extension } } } } } };
+        _ = Task.Run(async () =>
+        {
+            try
+            {
+                await _rpc.InvokeWithParameterObjectAsync("client/registerCapability", registration);
+            }
+            catch (Exception e)
+            {
+                _log.Warn($"the client did not register the file watcher: {e.Message}");
+            }
+        });
     }
 
     /// <summary>The transport has already marked the lifecycle as shut down, in arrival order, and refuses later requests.</summary>
@@ -117,7 +142,19 @@ public sealed class LanguageServerTarget
     public void DidClose(DidCloseTextDocumentParams p) => Notify(() =>
     {
         _store.Close(p.TextDocument.Uri);
-        _ = _diagnostics.ClearAsync(p.TextDocument.Uri);
+        _ = _diagnostics.ClosedAsync(p.TextDocument.Uri);
+    });
+
+    /// <summary>
+    /// Files changed on disk (the client watches *.motors): closed files of a plant are read again
+    /// and every open document analysed again, so a plant's diagnostics follow a file saved,
+    /// created or deleted outside the editor.
+    /// </summary>
+    [JsonRpcMethod("workspace/didChangeWatchedFiles", UseSingleObjectParameterDeserialization = true)]
+    public void DidChangeWatchedFiles(DidChangeWatchedFilesParams p) => Notify(() =>
+    {
+        _plants.DiskChanged();
+        foreach (var d in _store.All) _diagnostics.Schedule(d);
     });
 
     [JsonRpcMethod("textDocument/didSave", UseSingleObjectParameterDeserialization = true)]
@@ -148,6 +185,19 @@ public sealed class LanguageServerTarget
         var wanted = p.Context.Only;
         bool Allowed(string kind) => wanted is null || wanted.Any(w => kind == w || kind.StartsWith(w + ".", StringComparison.Ordinal));
         var actions = new List<CodeAction>();
+        if (_plants.Of(s, ct) is { } plant)
+        {
+            // A file of a plant: the plant's findings and fixes, as its diagnostics show them.
+            if (Allowed("quickfix")) actions.AddRange(PlantActions.QuickFixes(plant, uri, range));
+            if (Allowed("source.fixAll") && PlantActions.HasFixes(plant))
+            {
+                if (_resolvesEdits) actions.Add(new CodeAction(SizeEverythingTitle, "source.fixAll", null, null, null, new CodeActionData(uri, s.Version)));
+                else if (PlantActions.SizeEverything(plant) is { } edit) actions.Add(new CodeAction(SizeEverythingTitle, "source.fixAll", null, null, edit));
+            }
+
+            return actions.ToArray();
+        }
+
         if (Allowed("quickfix"))
         {
             foreach (var f in s.Analysis.Findings.Where(f => f.Fix is not null && Overlaps(f.Range, range)))
@@ -173,6 +223,8 @@ public sealed class LanguageServerTarget
         {
             if (s.Version != data.Version)
                 throw new LocalRpcException("the document changed since this action was offered") { ErrorCode = ErrorCodes.ContentModified };
+            if (_plants.Of(s, ct) is { } plant)
+                return action with { Edit = PlantActions.SizeEverything(plant) ?? new WorkspaceEdit(new() { [data.Uri] = [] }) };
             return SizeEverything(s) ?? action with { Edit = new WorkspaceEdit(new() { [data.Uri] = [] }) };
         });
     }
@@ -279,6 +331,17 @@ public sealed class LanguageServerTarget
     }
 
     // ---- helpers ----
+
+    /// <summary>A document on its own, or the whole plant it belongs to (with its open buffers in place of their files).</summary>
+    private DiagnosticBatch AnalyseForDiagnostics(DocumentSnapshot s, CancellationToken ct) =>
+        _plants.Of(s, ct) is { } plant ? Features.Diagnostics.Plant(plant) : Features.Diagnostics.Single(s);
+
+    private bool ReanalyseIfOpen(string uri)
+    {
+        if (_store.Get(uri) is not { } s) return false;
+        _diagnostics.Schedule(s);
+        return true;
+    }
 
     /// <summary>Runs a read off the reader thread on the current snapshot; ContentModified if the document moved on meanwhile.</summary>
     private Task<T?> Read<T>(string uri, CancellationToken ct, Func<DocumentSnapshot, T?> read) => Run(() =>

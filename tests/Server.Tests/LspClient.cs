@@ -47,9 +47,13 @@ public sealed class LspClient : IAsyncDisposable
         Notify("textDocument/didChange", new DidChangeTextDocumentParams(new VersionedTextDocumentIdentifier(uri, version), changes));
 
     /// <summary>Waits for diagnostics of <paramref name="uri"/> at <paramref name="version"/> (or any version when null).</summary>
-    public Task<PublishDiagnosticsParams> DiagnosticsAsync(string uri, int? version = null, TimeSpan? timeout = null)
+    public Task<PublishDiagnosticsParams> DiagnosticsAsync(string uri, int? version = null, TimeSpan? timeout = null) =>
+        DiagnosticsWhere(uri, p => version is null || p.Version == version, timeout, version);
+
+    /// <summary>Waits for diagnostics of <paramref name="uri"/> that satisfy <paramref name="match"/> (the latest published first).</summary>
+    public Task<PublishDiagnosticsParams> DiagnosticsWhere(string uri, Func<PublishDiagnosticsParams, bool> match, TimeSpan? timeout = null, int? version = null)
     {
-        bool Match(PublishDiagnosticsParams p) => p.Uri == uri && (version is null || p.Version == version);
+        bool Match(PublishDiagnosticsParams p) => p.Uri == uri && match(p);
         lock (_gate)
         {
             if (_latest.TryGetValue(uri, out var seen) && Match(seen)) return Task.FromResult(seen);

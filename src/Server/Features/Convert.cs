@@ -23,4 +23,10 @@ public static class Convert
     public static Protocol.Diagnostic ToLsp(Finding f, string uri) =>
         new(ToLsp(f.Range), Severity(f.Severity), f.Code, "motorlang", f.Message,
             f.RelatedLocations.IsEmpty ? null : f.RelatedLocations.Select(r => new DiagnosticRelatedInformation(new Location(uri, ToLsp(r.Range)), r.Message)).ToArray());
+
+    /// <summary>A finding of a plant: each related location in its own file (<paramref name="relatedUris"/>, one per location).</summary>
+    public static Protocol.Diagnostic ToLsp(Finding f, string uri, IReadOnlyList<string> relatedUris) =>
+        new(ToLsp(f.Range), Severity(f.Severity), f.Code, "motorlang", f.Message,
+            f.RelatedLocations.IsEmpty ? null : f.RelatedLocations.Select((r, i) => new DiagnosticRelatedInformation(
+                new Location(i < relatedUris.Count ? relatedUris[i] : uri, ToLsp(r.Range)), r.Message)).ToArray());
 }

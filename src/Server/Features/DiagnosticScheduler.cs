@@ -1,5 +1,4 @@
 using System.Collections.Concurrent;
-using MotorLang.Analysis.Findings;
 using MotorLang.Server.Documents;
 using MotorLang.Server.Protocol;
 
@@ -11,11 +10,22 @@ namespace MotorLang.Server.Features;
 /// "Newer" is the order in which changes arrived, not the client's version number: a client may
 /// send version 3 after version 5, the store then holds version 3's text, and its diagnostics are
 /// the ones that must be shown.
+/// <para>
+/// A run analyses the document on its own or the plant it belongs to (<paramref name="analyse"/>);
+/// a plant's run publishes every file of the plant, open or not, each unless a later run has
+/// already published that file. The scheduler remembers which files it published for which plant:
+/// a file that leaves a plant is cleared (or, when open, analysed again), and when a document
+/// leaves a plant the plant's other open files are analysed again, or its files cleared when none
+/// is open.
+/// </para>
 /// </summary>
-public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> publish, TimeSpan debounce, Action<string> log)
+public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> publish, TimeSpan debounce, Action<string> log,
+    Func<DocumentSnapshot, CancellationToken, DiagnosticBatch> analyse, Func<string, bool> reanalyseIfOpen)
 {
     private readonly ConcurrentDictionary<string, CancellationTokenSource> _pending = new(StringComparer.Ordinal);
     private readonly Dictionary<string, long> _published = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, string> _plantOf = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, HashSet<string>> _plantFiles = new(StringComparer.Ordinal);
     private long _sequence;
     private readonly SemaphoreSlim _publishing = new(1, 1);
 
@@ -33,14 +43,42 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
         _ = RunAsync(snapshot, Interlocked.Increment(ref _sequence), cts);
     }
 
-    /// <summary>Cancels pending work and clears the document's diagnostics (on close).</summary>
-    public async Task ClearAsync(string uri)
+    /// <summary>
+    /// A document was closed: cancels its pending work; a document of a plant has the plant analysed
+    /// again through another open file (its own diagnostics then come from disk), or, with none
+    /// open, every file of the plant cleared; any other document's diagnostics are cleared.
+    /// </summary>
+    public async Task ClosedAsync(string uri)
     {
         if (_pending.TryRemove(uri, out var cts)) await cts.CancelAsync();
+        var sequence = Interlocked.Increment(ref _sequence);
         await _publishing.WaitAsync();
         try
         {
-            _published.Remove(uri);
+            if (_plantOf.TryGetValue(uri, out var root) && _plantFiles.TryGetValue(root, out var files))
+            {
+                if (!files.Where(f => f != uri).ToList().Any(reanalyseIfOpen)) await ClearPlantAsync(root, sequence);
+                return;
+            }
+
+            _published[uri] = sequence;
+            await publish(new PublishDiagnosticsParams(uri, null, []));
+        }
+        finally
+        {
+            _publishing.Release();
+        }
+    }
+
+    /// <summary>Cancels pending work and clears the document's diagnostics.</summary>
+    public async Task ClearAsync(string uri)
+    {
+        if (_pending.TryRemove(uri, out var cts)) await cts.CancelAsync();
+        var sequence = Interlocked.Increment(ref _sequence);
+        await _publishing.WaitAsync();
+        try
+        {
+            _published[uri] = sequence;
             await publish(new PublishDiagnosticsParams(uri, null, []));
         }
         finally
@@ -55,17 +93,15 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
         try
         {
             if (debounce > TimeSpan.Zero) await Task.Delay(debounce, ct);
-            var analysis = await Task.Run(() => snapshot.Analysis, ct);
+            var batch = await Task.Run(() => analyse(snapshot, ct), ct);
             if (ct.IsCancellationRequested) return;
-            var diagnostics = FindingCap.Shown(analysis.Findings).Select(f => Convert.ToLsp(f, snapshot.Uri)).ToArray();
             // One publication at a time, and never an earlier change after a later one: an analysis
             // that lost the race to its cancellation must not overwrite fresher diagnostics.
             await _publishing.WaitAsync(CancellationToken.None);
             try
             {
-                if (ct.IsCancellationRequested || (_published.TryGetValue(snapshot.Uri, out var last) && last > sequence)) return;
-                _published[snapshot.Uri] = sequence;
-                await publish(new PublishDiagnosticsParams(snapshot.Uri, snapshot.Version, diagnostics));
+                if (ct.IsCancellationRequested) return;
+                await PublishAsync(snapshot.Uri, batch, sequence);
             }
             finally
             {
@@ -86,5 +122,64 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
             // timer holds nothing that needs disposing.
             _pending.TryRemove(new KeyValuePair<string, CancellationTokenSource>(snapshot.Uri, cts));
         }
+    }
+
+    /// <summary>Publishes a run's files (under the publishing lock) and keeps the plants' file sets up to date.</summary>
+    private async Task PublishAsync(string uri, DiagnosticBatch batch, long sequence)
+    {
+        if (batch.Plant is { } root)
+        {
+            var now = batch.Files.Select(f => f.Uri).ToHashSet(StringComparer.Ordinal);
+            foreach (var f in batch.Files)
+            {
+                if (_published.TryGetValue(f.Uri, out var last) && last > sequence) continue;
+                _published[f.Uri] = sequence;
+                _plantOf[f.Uri] = root;
+                await publish(new PublishDiagnosticsParams(f.Uri, f.Version, f.Diagnostics));
+            }
+
+            if (_plantFiles.TryGetValue(root, out var before))
+            {
+                foreach (var gone in before.Where(u => !now.Contains(u)).ToList())
+                {
+                    _plantOf.Remove(gone);
+                    if (!reanalyseIfOpen(gone)) await PublishEmptyAsync(gone, sequence);
+                }
+            }
+
+            _plantFiles[root] = now;
+            return;
+        }
+
+        foreach (var f in batch.Files)
+        {
+            if (_published.TryGetValue(f.Uri, out var last) && last > sequence) continue;
+            _published[f.Uri] = sequence;
+            await publish(new PublishDiagnosticsParams(f.Uri, f.Version, f.Diagnostics));
+        }
+
+        // The document was part of a plant and is not any more: the plant's other files described it.
+        if (_plantOf.Remove(uri, out var left) && _plantFiles.TryGetValue(left, out var files))
+        {
+            files.Remove(uri);
+            if (!files.ToList().Any(reanalyseIfOpen)) await ClearPlantAsync(left, sequence);
+        }
+    }
+
+    private async Task ClearPlantAsync(string root, long sequence)
+    {
+        if (!_plantFiles.Remove(root, out var files)) return;
+        foreach (var f in files)
+        {
+            _plantOf.Remove(f);
+            await PublishEmptyAsync(f, sequence);
+        }
+    }
+
+    private async Task PublishEmptyAsync(string uri, long sequence)
+    {
+        if (_published.TryGetValue(uri, out var last) && last > sequence) return;
+        _published[uri] = sequence;
+        await publish(new PublishDiagnosticsParams(uri, null, []));
     }
 }

@@ -15,4 +15,11 @@ public static class ClientCapabilities
         if (!resolve.TryGetProperty("properties", out var properties) || properties.ValueKind != JsonValueKind.Array) return false;
         return properties.EnumerateArray().Any(p => p.ValueKind == JsonValueKind.String && p.GetString() == "edit");
     }
+
+    /// <summary>True when the client lets the server register file watchers (workspace.didChangeWatchedFiles.dynamicRegistration).</summary>
+    public static bool RegistersFileWatchers(JsonElement? capabilities) =>
+        capabilities is { ValueKind: JsonValueKind.Object } root
+        && root.TryGetProperty("workspace", out var ws) && ws.ValueKind == JsonValueKind.Object
+        && ws.TryGetProperty("didChangeWatchedFiles", out var watched) && watched.ValueKind == JsonValueKind.Object
+        && watched.TryGetProperty("dynamicRegistration", out var dynamic) && dynamic.ValueKind == JsonValueKind.True;
 }

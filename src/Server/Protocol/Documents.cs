@@ -16,3 +16,8 @@ public sealed record DiagnosticRelatedInformation(Location Location, string Mess
 public sealed record Diagnostic(Range Range, int Severity, string Code, string Source, string Message, DiagnosticRelatedInformation[]? RelatedInformation = null);
 
 public sealed record PublishDiagnosticsParams(string Uri, int? Version, Diagnostic[] Diagnostics);
+
+/// <summary>A file created (1), changed (2) or deleted (3) on disk.</summary>
+public sealed record FileEvent(string Uri, int Type);
+
+public sealed record DidChangeWatchedFilesParams(FileEvent[] Changes);
