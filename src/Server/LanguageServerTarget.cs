@@ -1,6 +1,7 @@
 using System.Diagnostics;
 using MotorLang.Analysis.Editing;
 using MotorLang.Analysis.Fixes;
+using MotorLang.Analysis.Plant;
 using MotorLang.Parser.Formatting;
 using MotorLang.Parser.Text;
 using MotorLang.Server.Documents;
@@ -167,7 +168,7 @@ public sealed class LanguageServerTarget
 
     [JsonRpcMethod("textDocument/hover", UseSingleObjectParameterDeserialization = true)]
     public Task<Hover?> Hover(TextDocumentPositionParams p, CancellationToken ct) => Read(p.TextDocument.Uri, ct, s =>
-        Breakdown.At(s.Analysis, Convert.FromLsp(p.Position)) is { } view
+        (InPlant(s, ct) is { } plant ? PlantBreakdown.At(plant.View.Analysis, plant.Name, Convert.FromLsp(p.Position)) : Breakdown.At(s.Analysis, Convert.FromLsp(p.Position))) is { } view
             ? new Hover(new MarkupContent("markdown", HoverRenderer.Markdown(view)), Convert.ToLsp(view.Range))
             : null);
 
@@ -266,6 +267,15 @@ public sealed class LanguageServerTarget
     {
         var settings = _presentation;
         if (!settings.InlayFlc && !settings.InlayWire) return [];
+        if (InPlant(s, ct) is { } plant)
+        {
+            return PlantBreakdown.MotorsOnLines(plant.View.Analysis, plant.Name, p.Range.Start.Line, p.Range.End.Line)
+                .Select(x => (x.Line, x.Motor, label: Breakdown.InlaySummary(x.Motor, settings.InlayFlc, settings.InlayWire)))
+                .Where(x => x.label is not null)
+                .Select(x => new InlayHint(new Position(x.Line, x.Motor.Motor.Header.Line.Length), x.label!, null, true))
+                .ToArray();
+        }
+
         return Breakdown.MotorsOnLines(s.Analysis, p.Range.Start.Line, p.Range.End.Line)
             .Select(m => (m, label: Breakdown.InlaySummary(m, settings.InlayFlc, settings.InlayWire)))
             .Where(x => x.label is not null)
@@ -277,16 +287,29 @@ public sealed class LanguageServerTarget
     public Task<CodeLens[]?> CodeLens(CodeLensParams p, CancellationToken ct) => Read(p.TextDocument.Uri, ct, s =>
         !_presentation.CodeLens
             ? []
+            : InPlant(s, ct) is { } plant
+            ? PlantBreakdown.Feeders(plant.View.Analysis, plant.Name).Select(f => new CodeLens(Convert.ToLsp(f.Header),
+                new Command(Breakdown.FeederSummary(f.Feeder), "motorlang.showSchedule", [p.TextDocument.Uri]))).ToArray()
             : s.Analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index).Select(f => new CodeLens(Convert.ToLsp(f.Feeder.Header.Range),
                 new Command(Breakdown.FeederSummary(f), "motorlang.showSchedule", [p.TextDocument.Uri]))).ToArray());
 
     [JsonRpcMethod("textDocument/definition", UseSingleObjectParameterDeserialization = true)]
     public Task<Location?> Definition(TextDocumentPositionParams p, CancellationToken ct) => Read(p.TextDocument.Uri, ct, s =>
-        Tags.At(s.Parse, Convert.FromLsp(p.Position)) is { Definition: { } d } ? new Location(p.TextDocument.Uri, Convert.ToLsp(d)) : null);
+    {
+        if (InPlant(s, ct) is { } plant)
+            return PlantTags.At(plant.View.Analysis, plant.Name, Convert.FromLsp(p.Position)) is { Definition: { } pd } ? plant.Location(pd) : null;
+        return Tags.At(s.Parse, Convert.FromLsp(p.Position)) is { Definition: { } d } ? new Location(p.TextDocument.Uri, Convert.ToLsp(d)) : null;
+    });
 
     [JsonRpcMethod("textDocument/references", UseSingleObjectParameterDeserialization = true)]
     public Task<Location[]?> References(ReferenceParams p, CancellationToken ct) => Read(p.TextDocument.Uri, ct, s =>
     {
+        if (InPlant(s, ct) is { } plant)
+        {
+            if (PlantTags.At(plant.View.Analysis, plant.Name, Convert.FromLsp(p.Position)) is not { } found) return [];
+            return (p.Context?.IncludeDeclaration == false ? found.References : found.All).Select(plant.Location).ToArray();
+        }
+
         if (Tags.At(s.Parse, Convert.FromLsp(p.Position)) is not { } tag) return [];
         var ranges = p.Context?.IncludeDeclaration == false ? tag.References : tag.All;
         return ranges.Select(r => new Location(p.TextDocument.Uri, Convert.ToLsp(r))).ToArray();
@@ -296,14 +319,30 @@ public sealed class LanguageServerTarget
     public Task<PrepareRenameResult?> PrepareRename(TextDocumentPositionParams p, CancellationToken ct) => Read(p.TextDocument.Uri, ct, s =>
     {
         var at = Convert.FromLsp(p.Position);
+        if (InPlant(s, ct) is { } plant)
+        {
+            return PlantTags.At(plant.View.Analysis, plant.Name, at) is { } found && PlantTags.RangeAt(plant.View.Analysis, plant.Name, at) is { } r
+                ? new PrepareRenameResult(Convert.ToLsp(r), found.Tag)
+                : null;
+        }
+
         if (Tags.At(s.Parse, at) is not { } tag) return null;
         var range = tag.All.First(r => r.Contains(at));
         return new PrepareRenameResult(Convert.ToLsp(range), tag.Tag);
     });
 
+    /// <summary>Renames a tag where it is defined and wherever 'from' or 'like' names it; in a plant, in every file (one WorkspaceEdit).</summary>
     [JsonRpcMethod("textDocument/rename", UseSingleObjectParameterDeserialization = true)]
     public Task<WorkspaceEdit?> Rename(RenameParams p, CancellationToken ct) => Read(p.TextDocument.Uri, ct, s =>
     {
+        if (InPlant(s, ct) is { } plant)
+        {
+            var (plantEdits, plantError) = PlantTags.Rename(plant.View.Analysis, plant.Name, Convert.FromLsp(p.Position), p.NewName);
+            if (plantError is not null) throw new LocalRpcException(plantError) { ErrorCode = ErrorCodes.RequestFailed };
+            return new WorkspaceEdit(plantEdits!.GroupBy(e => plant.UriOf(e.File), StringComparer.Ordinal)
+                .ToDictionary(g => g.Key, g => g.Select(e => Convert.ToLsp(e.Edit)).ToArray(), StringComparer.Ordinal));
+        }
+
         var (edits, error) = Tags.Rename(s.Parse, Convert.FromLsp(p.Position), p.NewName);
         if (error is not null) throw new LocalRpcException(error) { ErrorCode = ErrorCodes.RequestFailed };
         return Edit(p.TextDocument.Uri, edits!.Select(Convert.ToLsp));
@@ -335,6 +374,10 @@ public sealed class LanguageServerTarget
     /// <summary>A document on its own, or the whole plant it belongs to (with its open buffers in place of their files).</summary>
     private DiagnosticBatch AnalyseForDiagnostics(DocumentSnapshot s, CancellationToken ct) =>
         _plants.Of(s, ct) is { } plant ? Features.Diagnostics.Plant(plant) : Features.Diagnostics.Single(s);
+
+    /// <summary>The plant the document belongs to, and its name there; null for a document on its own.</summary>
+    private PlantContext? InPlant(DocumentSnapshot s, CancellationToken ct) =>
+        _plants.Of(s, ct) is { } view && view.FileOfUri(s.Uri) is { } file ? new PlantContext(view, file.Name) : null;
 
     private bool ReanalyseIfOpen(string uri)
     {

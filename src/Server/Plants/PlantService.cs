@@ -87,3 +87,11 @@ internal sealed class PlantService(DocumentStore store)
         return true;
     }
 }
+
+/// <summary>An open document as a file of its plant: the plant, and the document's name in it.</summary>
+internal sealed record PlantContext(PlantView View, string Name)
+{
+    public string UriOf(string file) => View.FileNamed(file)?.Uri ?? throw new ArgumentException($"'{file}' is not a file of this plant", nameof(file));
+
+    public Protocol.Location Location(MotorLang.Analysis.Plant.PlantRange r) => new(UriOf(r.File), Features.Convert.ToLsp(r.Range));
+}
