@@ -1,5 +1,4 @@
 using System.CommandLine;
-using System.Diagnostics;
 using System.Text.Json;
 using MotorLang.Analysis;
 using MotorLang.Analysis.Reports;
@@ -40,23 +39,6 @@ public static class DiffCommand
         if (File.Exists(spec)) return SourceFiles.Read(spec);
         var colon = spec.IndexOf(':');
         if (colon <= 0) throw new CliException($"cannot read '{spec}': no such file, and not a git revision:path");
-        var info = new ProcessStartInfo("git", ["show", spec])
-        {
-            RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false,
-            StandardOutputEncoding = System.Text.Encoding.UTF8,
-        };
-        try
-        {
-            using var git = Process.Start(info) ?? throw new CliException("cannot start git");
-            var text = git.StandardOutput.ReadToEnd();
-            var error = git.StandardError.ReadToEnd();
-            git.WaitForExit();
-            if (git.ExitCode != 0) throw new CliException($"git cannot show '{spec}': {error.Trim()}");
-            return text;
-        }
-        catch (System.ComponentModel.Win32Exception)
-        {
-            throw new CliException("git is not installed, so revisions cannot be read");
-        }
+        return Git.RunOrFail(null, $"show '{spec}'", "show", spec);
     }
 }

@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Reflection;
 using MotorLang.Analysis;
+using MotorLang.Analysis.Reports;
 using MotorLang.Cli.Usage;
 using MotorLang.Report;
 using MotorLang.Report.Diagram;
@@ -12,21 +13,29 @@ public static class ReportCommand
 {
     public static Command CreateReport(TextWriter stdout, TextWriter stderr, CliEnvironment env) => Create("report",
         "Write the motor schedule, feeder schedule, findings, one-line diagram and calculation sheets as one self-contained HTML file",
-        stdout, stderr, env, (analysis, name, date) => PlantReport.Html(analysis, new ReportInfo(name, Version, date)));
+        stdout, stderr, env, (analysis, name, date, revisions) => PlantReport.Html(analysis, new ReportInfo(name, Version, date, revisions)));
 
     public static Command CreateDiagram(TextWriter stdout, TextWriter stderr, CliEnvironment env) => Create("diagram",
         "Write the one-line diagram (supply, feeders, motors, loads) as SVG",
-        stdout, stderr, env, (analysis, name, _) => OneLineDiagram.Svg(analysis, $"{analysis.Parse.Model.Project?.Name?.Value ?? name} one-line diagram") + "\n");
+        stdout, stderr, env, (analysis, name, _, _) => OneLineDiagram.Svg(analysis, $"{analysis.Parse.Model.Project?.Name?.Value ?? name} one-line diagram") + "\n");
 
-    private static Command Create(string verb, string description, TextWriter stdout, TextWriter stderr, CliEnvironment env, Func<AnalysisResult, string, DateOnly, string> write)
+    private static Command Create(string verb, string description, TextWriter stdout, TextWriter stderr, CliEnvironment env, Func<AnalysisResult, string, DateOnly, IReadOnlyList<Revision>?, string> write)
     {
         var file = new Argument<string>("file") { Description = "A motor-list file, or - to read the list from standard input" };
         var output = SharedOptions.Output(verb == "report" ? "the report" : "the diagram");
         var name = new Option<string?>("--name") { Description = "The list's name in the title block (default: the path given)" };
         var date = new Option<string?>("--date") { Description = "Date of issue, yyyy-MM-dd (default: today, UTC)" };
+        var revisions = new Option<int>("--revisions")
+        {
+            Description = "How many revisions the revision log shows, from git (0: no log)", DefaultValueFactory = _ => 10,
+        };
         var stdinName = Inputs.CreateStdinNameOption();
         var command = new Command(verb, description) { file, output, name, stdinName };
-        if (verb == "report") command.Options.Add(date);
+        if (verb == "report")
+        {
+            command.Options.Add(date);
+            command.Options.Add(revisions);
+        }
         command.SetAction(result =>
         {
             var given = result.GetValue(file)!;
@@ -39,7 +48,15 @@ public static class ReportCommand
             if (result.GetValue(date) is { } d && !DateOnly.TryParseExact(d, "yyyy-MM-dd", out issued))
                 throw new CliException($"--date '{d}' is not a date written yyyy-MM-dd");
             var analysis = Analyzer.Analyze(text);
-            var content = write(analysis, listName, issued);
+            // The log is read from git only for a file on disk; a list from stdin has no history here.
+            IReadOnlyList<Revision>? log = null;
+            if (verb == "report" && given != "-" && result.GetValue(revisions) is var count and > 0)
+            {
+                var (shown, before) = RevisionHistory.Of(inputs.Names[0], text, count);
+                log = RevisionLog.Of(shown, before);
+            }
+
+            var content = write(analysis, listName, issued, log);
             if (result.GetValue(output) is { } path) SourceFiles.WriteOutput(path, System.Text.Encoding.UTF8.GetBytes(content));
             else stdout.Write(content);
             return analysis.HasErrors ? ExitCodes.Findings : ExitCodes.Clean;

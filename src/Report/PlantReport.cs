@@ -8,7 +8,7 @@ namespace MotorLang.Report;
 
 /// <summary>
 /// The issued report of a motor list as one self-contained HTML file: styles and the diagram inline,
-/// no script, nothing fetched. Sheets, each starting a printed page: motor schedule, feeder schedule,
+/// no script, nothing fetched. Sheets, each starting a printed page: revision log, motor schedule, feeder schedule,
 /// findings, one-line diagram, a calculation sheet per motor and per feeder, assumptions and readings,
 /// what was not checked, and the tool, tables and cautions.
 /// </summary>
@@ -26,6 +26,7 @@ public static class PlantReport
             .El("title", $"{project} — motor schedule and calculations")
             .Raw("<style>").Raw(Css).Raw(block.PageCss()).Raw("</style></head><body>");
         Contents(page, analysis);
+        RevisionSheet.Write(page, info.Revisions, block);
         MotorScheduleSheet.Write(page, analysis, data, block);
         FeederScheduleSheet.Write(page, analysis, data, block);
         FindingsSheet.Write(page, analysis, block);
@@ -46,7 +47,7 @@ public static class PlantReport
     private static void Contents(Page page, AnalysisResult analysis)
     {
         page.Open("nav", "class=\"contents\"").Open("ul");
-        foreach (var (id, text) in new[] { ("motor-schedule", "Motor schedule"), ("feeder-schedule", "Feeder schedule"), ("findings", "Findings"), ("diagram", "One-line diagram") })
+        foreach (var (id, text) in new[] { ("revisions", "Revision log"), ("motor-schedule", "Motor schedule"), ("feeder-schedule", "Feeder schedule"), ("findings", "Findings"), ("diagram", "One-line diagram") })
             page.Open("li").El("a", text, Page.A("href", "#" + id)).Close("li");
         foreach (var m in analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index))
             page.Open("li").El("a", "Motor " + m.Tag, Page.A("href", "#calc-motor-" + m.Tag)).Close("li");

@@ -119,8 +119,8 @@ public sealed partial class ReportBrowserTests(ChromiumFixture chromium) : IAsyn
             "[...document.querySelectorAll('section.sheet')].map(s => { const top = s.getBoundingClientRect().top; " +
             "return { id: s.id, height: s.getBoundingClientRect().height, " +
             "rows: [...s.querySelectorAll('tr, .section, li')].map(r => { const b = r.getBoundingClientRect(); return { top: b.top - top, bottom: b.bottom - top }; }) }; })");
-        // 4 sheets before the calculations, one per motor (5) and feeder (1), then 3 after.
-        Assert.Equal(4 + 5 + 1 + 3, sheets.Length);
+        // 5 sheets before the calculations (revision log, motor and feeder schedules, findings, diagram), one per motor (5) and feeder (1), then 3 after.
+        Assert.Equal(5 + 5 + 1 + 3, sheets.Length);
         foreach (var s in sheets)
         {
             Assert.True(s.Height <= contentHeight, $"{paper}: sheet {s.Id} is {s.Height:0} px tall, a page holds {contentHeight:0}");
@@ -143,8 +143,9 @@ public sealed partial class ReportBrowserTests(ChromiumFixture chromium) : IAsyn
             Assert.Contains($"Page {i + 1} of {document.NumberOfPages}", text);
         }
 
-        Assert.Contains("Motor schedule", document.GetPage(1).Text);
-        Assert.Contains("Calculation sheet — motor P-101", document.GetPage(5).Text);
+        Assert.Contains("Revision log", document.GetPage(1).Text);
+        Assert.Contains("Motor schedule", document.GetPage(2).Text);
+        Assert.Contains("Calculation sheet — motor P-101", document.GetPage(6).Text);
         Assert.Empty(problems);
     }
 
