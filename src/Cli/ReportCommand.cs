@@ -39,14 +39,15 @@ public static class ReportCommand
         command.SetAction(result =>
         {
             var given = result.GetValue(file)!;
-            // A folder is a plant of several files; reporting only one of them would leave circuits out silently.
-            if (Directory.Exists(given)) throw new CliException($"'{given}' is a folder: {verb} takes one motor-list file (plants of several files are not reported yet)");
+            var issuedOn = DateOnly.FromDateTime(DateTime.UtcNow);
+            if (result.GetValue(date) is { } day && !DateOnly.TryParseExact(day, "yyyy-MM-dd", out issuedOn))
+                throw new CliException($"--date '{day}' is not a date written yyyy-MM-dd");
+            if (given != "-" && PlantOf(given, stderr) is { } plant)
+                return WritePlant(plant, result.GetValue(name), issuedOn, result.GetValue(output), stdout, verb, write);
             var inputs = Inputs.Resolve([given], result.GetValue(stdinName), env, stderr);
             var text = inputs.Read(inputs.Names[0]);
             var listName = result.GetValue(name) ?? inputs.Names[0];
-            var issued = DateOnly.FromDateTime(DateTime.UtcNow);
-            if (result.GetValue(date) is { } d && !DateOnly.TryParseExact(d, "yyyy-MM-dd", out issued))
-                throw new CliException($"--date '{d}' is not a date written yyyy-MM-dd");
+            var issued = issuedOn;
             var analysis = Analyzer.Analyze(text);
             // The log is read from git only for a file on disk; a list from stdin has no history here.
             IReadOnlyList<Revision>? log = null;
@@ -62,6 +63,37 @@ public static class ReportCommand
             return analysis.HasErrors ? ExitCodes.Findings : ExitCodes.Clean;
         });
         return command;
+    }
+
+    /// <summary>
+    /// The plant a path belongs to: a folder holding one plant, or a file of a plant. A folder of
+    /// several unrelated lists is refused: reporting one of them would leave circuits out silently.
+    /// </summary>
+    private static Files.PlantFolder? PlantOf(string path, TextWriter stderr)
+    {
+        var units = PlantInputs.Group(SourceFiles.Expand([path], stderr));
+        if (units is [{ Plant: { } plant }]) return plant;
+        if (Directory.Exists(path))
+            throw new CliException($"'{path}' is a folder of {units.Count} separate motor lists, not one plant: name one file, or make the folder a plant ('plant' in its project block; docs/format.md, Plants)");
+        return null;
+    }
+
+    /// <summary>The report or diagram of a whole plant: its files analysed as one, every place named by its own file and line.</summary>
+    private static int WritePlant(Files.PlantFolder plant, string? name, DateOnly issued, string? target, TextWriter stdout, string verb,
+        Func<AnalysisResult, string, DateOnly, IReadOnlyList<Revision>?, string> write)
+    {
+        var analysis = PlantInputs.Analyze(plant);
+        if (analysis.Joined is not { } joined || analysis.Apart.Count > 0)
+            throw new CliException($"a file of the plant in '{PlantInputs.Shown(plant.Root)}' could not be read into it, so its {verb} would leave circuits out; 'motorlang check' names the file");
+        var shown = plant.Members.ToDictionary(m => m.Name, m => PlantInputs.Shown(m.Path));
+        var lines = SourceLines.Plant(line => analysis.FileOfLine(line) is var (f, l) ? (shown.GetValueOrDefault(f, f), l) : default);
+        var content = verb == "report"
+            // A plant's revision log (a semantic diff of the whole plant per commit) is not written yet; the sheet says there is none.
+            ? PlantReport.Html(joined, new ReportInfo(name ?? PlantInputs.Shown(plant.Root), Version, issued) { Lines = lines })
+            : write(joined, name ?? PlantInputs.Shown(plant.Root), issued, null);
+        if (target is not null) SourceFiles.WriteOutput(target, System.Text.Encoding.UTF8.GetBytes(content));
+        else stdout.Write(content);
+        return analysis.HasErrors ? ExitCodes.Findings : ExitCodes.Clean;
     }
 
     private static string Version =>

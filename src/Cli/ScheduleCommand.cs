@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Text;
 using System.Text.Json;
 using MotorLang.Analysis;
+using MotorLang.Analysis.Plant;
 using MotorLang.Analysis.Reports;
 using MotorLang.Analysis.Reports.Data;
 using MotorLang.Cli.Output;
@@ -35,8 +36,7 @@ public static class ScheduleCommand
             if (path != "-" && PlantInputs.Group([source]) is [{ Plant: { } plant }])
             {
                 var chosenForPlant = result.GetValue(format);
-                if (chosenForPlant is not ("table" or "markdown"))
-                    throw new CliException($"'{path}' is part of the plant in '{PlantInputs.Shown(plant.Root)}': its schedule can be printed as table or markdown; {chosenForPlant} is not written for a plant yet");
+                if (chosenForPlant is not ("table" or "markdown")) return TypedPlantSchedule(plant, chosenForPlant!, result.GetValue(table)!, result.GetValue(output), stdout);
                 var (plantText, errors) = PlantSchedule(plant, chosenForPlant == "markdown", result.GetValue(output) is null && env.OutputIsTerminal ? env.TerminalWidth : null);
                 if (result.GetValue(output) is { } to) SourceFiles.WriteOutput(to, System.Text.Encoding.UTF8.GetBytes(plantText));
                 else stdout.Write(plantText);
@@ -65,6 +65,27 @@ public static class ScheduleCommand
             return analysis.HasErrors ? ExitCodes.Findings : ExitCodes.Clean;
         });
         return command;
+    }
+
+    /// <summary>A plant's schedule as JSON, CSV or xlsx: one table of every file's rows, each naming its file and line.</summary>
+    private static int TypedPlantSchedule(Files.PlantFolder plant, string format, string table, string? target, TextWriter stdout)
+    {
+        var analysis = PlantInputs.Analyze(plant);
+        var shown = plant.Members.ToDictionary(m => m.Name, m => PlantInputs.Shown(m.Path));
+        var data = PlantScheduleData.Of(analysis, n => shown.GetValueOrDefault(n, n))
+            ?? throw new CliException($"a file of the plant in '{PlantInputs.Shown(plant.Root)}' could not be read into it, so its {format} schedule would leave circuits out; 'motorlang check' names the file");
+        if (format == "xlsx")
+        {
+            SourceFiles.WriteOutput(target!, ScheduleXlsx.Write(data));
+        }
+        else
+        {
+            var text = format == "csv" ? ScheduleCsv.Write(data, table) : ScheduleJson.Write(data);
+            if (target is null) stdout.Write(text);
+            else SourceFiles.WriteOutput(target, System.Text.Encoding.UTF8.GetBytes(text));
+        }
+
+        return analysis.HasErrors ? ExitCodes.Findings : ExitCodes.Clean;
     }
 
     /// <summary>

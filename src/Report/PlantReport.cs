@@ -16,7 +16,8 @@ public static class PlantReport
 {
     public static string Html(AnalysisResult analysis, ReportInfo info)
     {
-        var data = ScheduleDataBuilder.Of(analysis, info.SourceName);
+        var lines = info.Lines ?? SourceLines.OneFile(info.SourceName);
+        var data = ScheduleDataBuilder.Of(analysis, lines.At);
         var project = data.Title.Project is { Length: > 0 } name ? name : Path.GetFileNameWithoutExtension(info.SourceName);
         var block = new SheetTitle(project, info.SourceName, info.Date, info.ToolVersion, data.Title);
         var page = new Page();
@@ -27,15 +28,15 @@ public static class PlantReport
             .Raw("<style>").Raw(Css).Raw(block.PageCss()).Raw("</style></head><body>");
         Contents(page, analysis);
         RevisionSheet.Write(page, info.Revisions, block);
-        MotorScheduleSheet.Write(page, analysis, data, block);
+        MotorScheduleSheet.Write(page, analysis, data, block, lines);
         FeederScheduleSheet.Write(page, analysis, data, block);
-        FindingsSheet.Write(page, analysis, block);
+        FindingsSheet.Write(page, analysis, block, lines);
         page.SheetStart("diagram", "One-line diagram", block, "landscape diagram");
         page.Raw("<div class=\"figure\">").Raw(OneLineDiagram.Svg(analysis, $"{project} one-line diagram")).Raw("</div>");
         page.El("p", "Symbols after IEEE 315 / IEC 60617: ac supply (circle with sine), circuit breaker (blade with a cross), fuse (rectangle), bus (heavy bar), motor (circle with M), other load (arrowhead). "
             + "Each label gives the conductors and the protection written, with the limit worked out; a marked corner and a last line name error (✗) or warning (⚠) findings.", "class=\"note\"");
         page.SheetEnd();
-        CalculationSheets.Write(page, analysis, block);
+        CalculationSheets.Write(page, analysis, block, lines);
         Assumptions.WriteAssumptions(page, analysis, block);
         Assumptions.WriteNotChecked(page, analysis, block);
         Assumptions.WriteSources(page, block);
@@ -50,9 +51,9 @@ public static class PlantReport
         foreach (var (id, text) in new[] { ("revisions", "Revision log"), ("motor-schedule", "Motor schedule"), ("feeder-schedule", "Feeder schedule"), ("findings", "Findings"), ("diagram", "One-line diagram") })
             page.Open("li").El("a", text, Page.A("href", "#" + id)).Close("li");
         foreach (var m in analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index))
-            page.Open("li").El("a", "Motor " + m.Tag, Page.A("href", "#calc-motor-" + m.Tag)).Close("li");
+            page.Open("li").El("a", "Motor " + m.Tag, Page.A("href", "#" + CalculationSheets.SheetId("motor", m.Motor, analysis))).Close("li");
         foreach (var f in analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index))
-            page.Open("li").El("a", "Feeder " + f.Tag, Page.A("href", "#calc-feeder-" + f.Tag)).Close("li");
+            page.Open("li").El("a", "Feeder " + f.Tag, Page.A("href", "#" + CalculationSheets.SheetId("feeder", f.Feeder, analysis))).Close("li");
         foreach (var (id, text) in new[] { ("assumptions", "Assumptions"), ("not-checked", "Not checked"), ("sources", "Tool, tables, cautions") })
             page.Open("li").El("a", text, Page.A("href", "#" + id)).Close("li");
         page.Close("ul").Close("nav");

@@ -88,7 +88,14 @@ public sealed class CliTests : IDisposable
         // The switchboard's totals count both MCCs: 10 hp at 460 V is 14 A (NFPA 70-2023 Table 430.250);
         // hand calculation, 430.24: 1.25 x 14 + 14 = 31.5 A required.
         Assert.Contains(output.Split('\n'), l => l.StartsWith("| SWBD-1 |") && l.Contains("31.5 A"));
-        Assert.NotEqual(0, Run("schedule", "--format", "json", Path.Combine(plant, "mcc2.motors")).Code);
+        // The typed schedule of the plant: one table, each row under its file, the same 31.5 A.
+        var (_, json, _) = Run("schedule", "--format", "json", Path.Combine(plant, "mcc2.motors"));
+        var data = System.Text.Json.Nodes.JsonNode.Parse(json)!;
+        Assert.Equal(["M-1", "M-2"], data["motors"]!.AsArray().Select(m => (string)m!["tag"]!));
+        Assert.EndsWith("mcc2.motors", (string)data["motors"]![1]!["file"]!);
+        var swbd = data["feeders"]!.AsArray().Single(f => (string)f!["tag"]! == "SWBD-1")!;
+        Assert.Equal(31.5m, (decimal)swbd["requiredAmpacity"]!["value"]!);
+        Assert.EndsWith("swbd.motors", (string)swbd["file"]!);
     }
 
     [Fact]

@@ -150,4 +150,26 @@ public sealed class ExecutableTests : IDisposable
         Assert.Equal(2, bad.Code);
         Assert.Contains("git cannot show", bad.Err);
     }
+
+    [Fact]
+    public void PlantScheduleJsonNamesEachRowsOwnFileAndLine()
+    {
+        var folder = Example("harbor-cannery");
+        var (code, json, err) = Executable.Run(_dir, "schedule", folder, "--format", "json");
+        Assert.True(code == 1, err); // the example's planted duplicate tag is an error
+        AssertValid(Path.Combine(Executable.RepoRoot, "docs", "schemas", "schedule.schema.json"), json);
+        var rows = JsonNode.Parse(json)!["motors"]!.AsArray().Concat(JsonNode.Parse(json)!["feeders"]!.AsArray()).ToList();
+        Assert.True(rows.Count >= 8, $"{rows.Count} rows");
+        foreach (var row in rows)
+        {
+            // Each row's file and line hold the header that writes its tag.
+            var text = File.ReadAllLines((string)row!["file"]!)[(int)row["line"]! - 1];
+            Assert.Matches($@"^\s*(feeder|motor|compressor)\s+{System.Text.RegularExpressions.Regex.Escape((string)row["tag"]!)}\b", text);
+        }
+
+        Assert.Equal(Directory.GetFiles(folder, "*.motors").Length - 1, // the switchboard file holds no motors
+            rows.Where(r => r!["feeder"] is not null).Select(r => (string)r!["file"]!).Distinct().Count());
+        var csv = Executable.Run(_dir, "schedule", folder, "--format", "csv", "--table", "feeders");
+        Assert.Contains("switchboard.motors", csv.Out);
+    }
 }

@@ -1,6 +1,7 @@
 using MotorLang.Analysis;
 using MotorLang.Analysis.Coverage;
 using MotorLang.Analysis.Editing;
+using MotorLang.Analysis.Findings;
 using MotorLang.Analysis.Resolution;
 using MotorLang.Analysis.Sizing;
 using MotorLang.Parser.Model;
@@ -16,13 +17,15 @@ namespace MotorLang.Report.Html;
 /// </summary>
 public static class CalculationSheets
 {
-    public static void Write(Page page, AnalysisResult analysis, SheetTitle block)
+    public static void Write(Page page, AnalysisResult analysis, SheetTitle block, SourceLines lines)
     {
         var model = analysis.Parse.Model;
+        // Findings by line, once: each sheet takes its circuit's lines from here, so the report stays linear in the list.
+        var byLine = analysis.Findings.ToLookup(f => f.Range.Start.Line);
         foreach (var m in analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index))
         {
-            page.SheetStart($"calc-motor-{m.Tag}", $"Calculation sheet — motor {m.Tag}", block, "calc");
-            Inputs(page, m.Motor, model, [
+            page.SheetStart(SheetId("motor", m.Motor, analysis), $"Calculation sheet — motor {m.Tag}", block, "calc");
+            Inputs(page, m.Motor, model, lines, [
                 ("Feeder", m.Motor.Feeder.Tag?.Value ?? ""),
                 ("Rating", (m.Motor.Power?.Value.ToString() ?? "not written") + (m.Quantity > 1 ? $", {m.Quantity} alike" : "")),
                 ("System", m.Volts > 0 ? $"{Format.Number(m.Volts)} V {Labels.Phases(m.Phases)}" : "not known"),
@@ -35,14 +38,14 @@ public static class CalculationSheets
             ]);
             Sections(page, Breakdown.MotorSections(m));
             Coverage(page, CircuitCoverage.For(m));
-            Findings(page, analysis, m.Motor.Header.Line.Index, m.Motor.LastLine);
+            Findings(page, byLine, lines, m.Motor.Header.Line.Index, m.Motor.LastLine);
             page.SheetEnd();
         }
 
         foreach (var f in analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index))
         {
-            page.SheetStart($"calc-feeder-{f.Tag}", $"Calculation sheet — feeder {f.Tag}", block, "calc");
-            Inputs(page, f.Feeder, model, [
+            page.SheetStart(SheetId("feeder", f.Feeder, analysis), $"Calculation sheet — feeder {f.Tag}", block, "calc");
+            Inputs(page, f.Feeder, model, lines, [
                 ("Supplied from", f.Feeder.From?.Value ?? "supply"),
                 ("System", f.Volts > 0 ? $"{Format.Number(f.Volts)} V {Labels.Phases(f.Phases)}" : "not known"),
                 ("Motors", string.Join(", ", f.Feeder.Motors.Select(x => x.Tag?.Value))),
@@ -54,16 +57,26 @@ public static class CalculationSheets
             ]);
             Sections(page, Breakdown.FeederSections(f));
             Coverage(page, CircuitCoverage.For(f));
-            Findings(page, analysis, f.Feeder.Header.Line.Index, f.Feeder.LastOwnLine);
+            Findings(page, byLine, lines, f.Feeder.Header.Line.Index, f.Feeder.LastOwnLine);
             page.SheetEnd();
         }
     }
 
-    private static void Inputs(Page page, CircuitNode circuit, MotorList model, (string Name, string Value)[] facts)
+    /// <summary>
+    /// The sheet's anchor: "calc-motor-P-101". A tag written twice (an error, but the report is still
+    /// written) gets its line after it, so every anchor stays unique and links reach the right sheet.
+    /// </summary>
+    public static string SheetId(string kind, CircuitNode circuit, AnalysisResult analysis)
+    {
+        var tag = circuit.Tag?.Value ?? "";
+        return ReferenceEquals(analysis.Parse.Model.Find(tag), circuit) ? $"calc-{kind}-{tag}" : $"calc-{kind}-{tag}-{circuit.Header.Line.Index + 1}";
+    }
+
+    private static void Inputs(Page page, CircuitNode circuit, MotorList model, SourceLines lines, (string Name, string Value)[] facts)
     {
         var settings = Settings.For(circuit, model);
         page.Open("div", "class=\"inputs\"")
-            .El("p", $"{circuit.Description?.Value ?? ""} — line {circuit.Header.Line.Index + 1} of the list", "class=\"where\"")
+            .El("p", $"{circuit.Description?.Value ?? ""} — {lines.Describe(circuit.Header.Line.Index)} of the list", "class=\"where\"")
             .Open("dl");
         foreach (var (name, value) in facts) page.El("dt", name).El("dd", value.Length == 0 ? "—" : value);
         page.El("dt", "Installation").El("dd", Assumptions.Describe(settings));
@@ -99,13 +112,13 @@ public static class CalculationSheets
         page.Close("ul").Close("div");
     }
 
-    private static void Findings(Page page, AnalysisResult analysis, int first, int last)
+    private static void Findings(Page page, ILookup<int, Finding> byLine, SourceLines lines, int first, int last)
     {
-        var on = analysis.Findings.Where(f => f.Range.Start.Line >= first && f.Range.Start.Line <= last).ToList();
+        var on = Enumerable.Range(first, last - first + 1).SelectMany(l => byLine[l]).ToList();
         if (on.Count == 0) return;
         page.Open("div", "class=\"circuit-findings\"").El("h3", "Findings");
         page.Open("ul");
-        foreach (var f in on) page.Open("li", $"class=\"{(f.Severity == Parser.Diagnostics.Severity.Error ? "err" : "warn")}\"").El("b", f.Code).Text($" line {f.Range.Start.Line + 1}: {f.Message}").Close("li");
+        foreach (var f in on) page.Open("li", $"class=\"{(f.Severity == Parser.Diagnostics.Severity.Error ? "err" : "warn")}\"").El("b", f.Code).Text($" {lines.Describe(f.Range.Start.Line)}: {f.Message}").Close("li");
         page.Close("ul").Close("div");
     }
 }

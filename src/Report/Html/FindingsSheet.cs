@@ -7,7 +7,7 @@ namespace MotorLang.Report.Html;
 /// <summary>Every finding of the list: counts by severity, then one row each with its circuit, line, code and message.</summary>
 public static class FindingsSheet
 {
-    public static void Write(Page page, AnalysisResult analysis, SheetTitle block)
+    public static void Write(Page page, AnalysisResult analysis, SheetTitle block, SourceLines lines)
     {
         page.SheetStart("findings", "Findings", block);
         var f = analysis.Findings;
@@ -30,8 +30,8 @@ public static class FindingsSheet
         {
             var circuit = model.BlockAt(x.Range.Start.Line) is CircuitNode c ? c.Tag?.Value ?? "" : model.BlockAt(x.Range.Start.Line) is ProjectNode ? "project" : "";
             var css = x.Severity switch { Severity.Error => "err", Severity.Warning => "warn", _ => "info" };
-            page.Open("tr", $"class=\"finding {css}\" {Page.A("data-line", (x.Range.Start.Line + 1).ToString())}")
-                .El("td", circuit, "class=\"tag\"").El("td", (x.Range.Start.Line + 1).ToString(), "class=\"num\"").El("td", x.Code, "class=\"code\"")
+            page.Open("tr", $"class=\"finding {css}\" {Page.A("data-line", (lines.At(x.Range.Start.Line).Line + 1).ToString())}")
+                .El("td", circuit, "class=\"tag\"").El("td", lines.Describe(x.Range.Start.Line), "class=\"num\"").El("td", x.Code, "class=\"code\"")
                 .El("td", x.Severity.ToString().ToLowerInvariant()).El("td", x.Message).Close("tr");
         }
 

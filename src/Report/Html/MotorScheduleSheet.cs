@@ -25,7 +25,7 @@ public static class MotorScheduleSheet
         ("", ["Status"]),
     ];
 
-    public static void Write(Page page, AnalysisResult analysis, ScheduleData data, SheetTitle block)
+    public static void Write(Page page, AnalysisResult analysis, ScheduleData data, SheetTitle block, SourceLines lines)
     {
         page.SheetStart("motor-schedule", "Motor schedule", block, "landscape");
         page.Open("table", "class=\"schedule motors\"").Open("thead").Open("tr", "class=\"groups\"");
@@ -34,7 +34,8 @@ public static class MotorScheduleSheet
         foreach (var column in Groups.SelectMany(g => g.Columns)) page.El("th", column);
         page.Close("tr").Close("thead");
 
-        var results = analysis.Motors.Values.ToDictionary(m => m.Motor.Header.Line.Index + 1);
+        // Rows and results meet at the place the motor is written (file and line): unique in a plant too.
+        var results = analysis.Motors.Values.ToDictionary(m => lines.At(m.Motor.Header.Line.Index) is var (file, line) ? (file, line + 1) : default);
         var descriptions = analysis.Parse.Model.Feeders.GroupBy(f => f.Tag?.Value ?? "").ToDictionary(g => g.Key, g => g.First().Description?.Value);
         var columnCount = Groups.Sum(g => g.Columns.Length);
         foreach (var feeder in data.Motors.GroupBy(m => m.Feeder))
@@ -43,7 +44,7 @@ public static class MotorScheduleSheet
             page.Open("tbody", "class=\"feeder-group\"").Open("tr", "class=\"feeder-row\"")
                 .El("th", $"Feeder {feeder.Key}{(description is { } d ? " — " + d : "")}", $"colspan=\"{columnCount}\" scope=\"rowgroup\"")
                 .Close("tr");
-            foreach (var m in feeder) Row(page, m, results.GetValueOrDefault(m.Line));
+            foreach (var m in feeder) Row(page, m, results.GetValueOrDefault((m.File, m.Line)));
             page.Close("tbody");
         }
 

@@ -13,7 +13,7 @@ public static class RevisionSheet
         page.SheetStart("revisions", "Revision log", block);
         if (revisions is null || revisions.Count == 0)
         {
-            page.El("p", "No revision log: the motor list is not kept in a git repository here, or has no commits yet, or the log was not asked for. "
+            page.El("p", "No revision log: the motor list is not kept in a git repository here, or has no commits yet, or the log was not asked for (--revisions 0), or the report is of a plant of several files (not written for plants yet). "
                 + "The title block's revision is as written in the list.", "class=\"lead\"");
             page.SheetEnd();
             return;

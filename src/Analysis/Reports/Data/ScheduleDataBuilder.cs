@@ -13,7 +13,14 @@ namespace MotorLang.Analysis.Reports.Data;
 public static class ScheduleDataBuilder
 {
     /// <param name="file">How the caller names the document (a path); Analysis itself knows no files.</param>
-    public static ScheduleData Of(AnalysisResult analysis, string? file = null)
+    public static ScheduleData Of(AnalysisResult analysis, string? file = null) => Of(analysis, line => (file, line));
+
+    /// <summary>
+    /// The typed schedule of an analysis whose lines come from several files (a plant's joined
+    /// analysis): <paramref name="locate"/> gives the file and 0-based line in it of each analysed
+    /// line, so every row and finding names its own file and line.
+    /// </summary>
+    public static ScheduleData Of(AnalysisResult analysis, Func<int, (string? File, int Line)> locate)
     {
         // Findings by line, once, so each row collects its own lines' findings: linear in the list's size.
         var byLine = new Dictionary<int, List<Finding>>();
@@ -25,13 +32,13 @@ public static class ScheduleDataBuilder
 
         var model = analysis.Parse.Model;
         var motors = analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index)
-            .Select(m => Motor(m, model, file, FindingsOn(byLine, m.Motor.Header.Line.Index, m.Motor.LastLine))).ToList();
+            .Select(m => Motor(m, model, locate(m.Motor.Header.Line.Index), FindingsOn(byLine, m.Motor.Header.Line.Index, m.Motor.LastLine, locate))).ToList();
         var feeders = analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index)
-            .Select(f => Feeder(f, file, FindingsOn(byLine, f.Feeder.Header.Line.Index, f.Feeder.LastOwnLine))).ToList();
+            .Select(f => Feeder(f, locate(f.Feeder.Header.Line.Index), FindingsOn(byLine, f.Feeder.Header.Line.Index, f.Feeder.LastOwnLine, locate))).ToList();
         return new ScheduleData(ScheduleData.CurrentFormatVersion, TitleBlocks.Of(model), motors, feeders);
     }
 
-    private static MotorData Motor(MotorResult m, MotorList model, string? file, IReadOnlyList<RowFinding> findings)
+    private static MotorData Motor(MotorResult m, MotorList model, (string? File, int Line) at, IReadOnlyList<RowFinding> findings)
     {
         var node = m.Motor;
         T? Own<T>(Func<MotorNode, Located<T>?> get) where T : struct => Likes.Get(node, model, get) is { } v ? v.Value.Value : null;
@@ -43,8 +50,8 @@ public static class ScheduleDataBuilder
         if (m.Disconnect is { Unavailable: { } why }) missing.Add(new NotComputed("disconnect", why));
         var row = new MotorData
         {
-            File = file,
-            Line = node.Header.Line.Index + 1,
+            File = at.File,
+            Line = at.Line + 1,
             Feeder = node.Feeder.Tag?.Value ?? "",
             Tag = m.Tag,
             Description = node.Description?.Value ?? "",
@@ -95,7 +102,7 @@ public static class ScheduleDataBuilder
         return row;
     }
 
-    private static FeederData Feeder(FeederResult f, string? file, IReadOnlyList<RowFinding> findings)
+    private static FeederData Feeder(FeederResult f, (string? File, int Line) at, IReadOnlyList<RowFinding> findings)
     {
         var node = f.Feeder;
         var missing = new List<NotComputed>();
@@ -103,8 +110,8 @@ public static class ScheduleDataBuilder
         var maximum = Value(f.MaximumProtection, "maximumProtection", missing);
         return new FeederData
         {
-            File = file,
-            Line = node.Header.Line.Index + 1,
+            File = at.File,
+            Line = at.Line + 1,
             Tag = f.Tag,
             Description = node.Description?.Value ?? "",
             From = node.From?.Value,
@@ -144,13 +151,14 @@ public static class ScheduleDataBuilder
         return r?.Value;
     }
 
-    private static List<RowFinding> FindingsOn(Dictionary<int, List<Finding>> byLine, int first, int last)
+    private static List<RowFinding> FindingsOn(Dictionary<int, List<Finding>> byLine, int first, int last, Func<int, (string? File, int Line)> locate)
     {
         var found = new List<RowFinding>();
         for (var line = first; line <= last; line++)
         {
             if (!byLine.TryGetValue(line, out var list)) continue;
-            found.AddRange(list.Select(f => new RowFinding(f.Code, SeverityName(f.Severity), line + 1, f.Message)));
+            var own = locate(line).Line + 1;
+            found.AddRange(list.Select(f => new RowFinding(f.Code, SeverityName(f.Severity), own, f.Message)));
         }
 
         return found;
