@@ -18,6 +18,9 @@ switch (args)
     case ["updates", var n]:
         QuickTiming.Updates(int.Parse(n));
         break;
+    case ["hovers", var n]:
+        HoverTiming.Run(int.Parse(n));
+        break;
     case ["edits", var n]:
         await ServerTiming.Edits(int.Parse(n));
         break;
