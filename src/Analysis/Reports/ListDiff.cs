@@ -27,20 +27,20 @@ public static class ListDiff
     {
         var old = Records(before);
         var now = Records(after);
-        var schedules = (Schedule.Of(before), Schedule.Of(after));
+        var schedules = (Before: Indexed.Of(before), After: Indexed.Of(after));
         var changes = new List<RecordChange>();
         foreach (var (key, node) in now)
         {
             if (!old.TryGetValue(key, out var was))
             {
-                changes.Add(new RecordChange(node.Keyword, node.Tag!.Value, ChangeKind.Added, [], [], FindingsOf(after, node), []));
+                changes.Add(new RecordChange(node.Keyword, node.Tag!.Value, ChangeKind.Added, [], [], FindingsOf(schedules.After.FindingsByLine, node), []));
                 continue;
             }
 
             var attributes = Attributes(was, node);
             var results = Results(schedules, was, node);
-            var oldFindings = FindingsOf(before, was);
-            var newFindings = FindingsOf(after, node);
+            var oldFindings = FindingsOf(schedules.Before.FindingsByLine, was);
+            var newFindings = FindingsOf(schedules.After.FindingsByLine, node);
             var added = newFindings.Except(oldFindings).ToList();
             var resolved = oldFindings.Except(newFindings).ToList();
             if (attributes.Count + results.Count + added.Count + resolved.Count > 0)
@@ -104,12 +104,26 @@ public static class ListDiff
         return changes;
     }
 
-    private static List<ResultChange> Results((Schedule Before, Schedule After) schedules, CircuitNode was, CircuitNode now)
+    /// <summary>A version's schedule rows by tag (the first of a duplicated tag, as before) and its findings by line: every lookup of the comparison is by key, so it is linear in the list.</summary>
+    private sealed record Indexed(IReadOnlyDictionary<string, ScheduleRow> Rows, IReadOnlyDictionary<string, FeederTotals> Feeders, ILookup<int, Finding> FindingsByLine)
+    {
+        public static Indexed Of(AnalysisResult analysis)
+        {
+            var schedule = Schedule.Of(analysis);
+            var rows = new Dictionary<string, ScheduleRow>(StringComparer.Ordinal);
+            foreach (var r in schedule.Rows) rows.TryAdd(r.Tag, r);
+            var feeders = new Dictionary<string, FeederTotals>(StringComparer.Ordinal);
+            foreach (var f in schedule.Feeders) feeders.TryAdd(f.Tag, f);
+            return new Indexed(rows, feeders, analysis.Findings.ToLookup(f => f.Range.Start.Line));
+        }
+    }
+
+    private static List<ResultChange> Results((Indexed Before, Indexed After) schedules, CircuitNode was, CircuitNode now)
     {
         var changes = new List<ResultChange>();
         if (was is MotorNode && now is MotorNode
-            && schedules.Before.Rows.FirstOrDefault(r => r.Tag == was.Tag!.Value) is { } oldRow
-            && schedules.After.Rows.FirstOrDefault(r => r.Tag == now.Tag!.Value) is { } newRow)
+            && schedules.Before.Rows.GetValueOrDefault(was.Tag!.Value) is { } oldRow
+            && schedules.After.Rows.GetValueOrDefault(now.Tag!.Value) is { } newRow)
         {
             Compare(changes, "FLC", oldRow.Flc, newRow.Flc);
             Compare(changes, "minimum wire", oldRow.MinimumWire, newRow.MinimumWire);
@@ -118,8 +132,8 @@ public static class ListDiff
             Compare(changes, "minimum ground", oldRow.MinimumGround, newRow.MinimumGround);
         }
         else if (was is FeederNode && now is FeederNode
-                 && schedules.Before.Feeders.FirstOrDefault(r => r.Tag == was.Tag!.Value) is { } oldTotals
-                 && schedules.After.Feeders.FirstOrDefault(r => r.Tag == now.Tag!.Value) is { } newTotals)
+                 && schedules.Before.Feeders.GetValueOrDefault(was.Tag!.Value) is { } oldTotals
+                 && schedules.After.Feeders.GetValueOrDefault(now.Tag!.Value) is { } newTotals)
         {
             Compare(changes, "required ampacity", oldTotals.RequiredAmpacity, newTotals.RequiredAmpacity);
             Compare(changes, "minimum wire", oldTotals.MinimumWire, newTotals.MinimumWire);
@@ -135,8 +149,8 @@ public static class ListDiff
     }
 
     /// <summary>The findings inside a record's lines, as "CODE message" without positions (lines move between versions).</summary>
-    private static List<string> FindingsOf(AnalysisResult a, CircuitNode node) =>
-        a.Findings.Where(f => f.Range.Start.Line >= node.Header.Line.Index && f.Range.Start.Line <= OwnEnd(node))
+    private static List<string> FindingsOf(ILookup<int, Finding> byLine, CircuitNode node) =>
+        Enumerable.Range(node.Header.Line.Index, OwnEnd(node) - node.Header.Line.Index + 1).SelectMany(l => byLine[l])
             .Where(f => f.Severity != Parser.Diagnostics.Severity.Information)
             .Select(f => $"{f.Code} {f.Message}").Distinct().ToList();
 

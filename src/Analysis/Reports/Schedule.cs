@@ -1,4 +1,5 @@
 using MotorLang.Analysis.Coverage;
+using MotorLang.Analysis.Findings;
 using MotorLang.Analysis.Sizing;
 using MotorLang.Sizing;
 using MotorLang.Domain;
@@ -54,14 +55,16 @@ public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<Fee
 {
     public static Schedule Of(AnalysisResult analysis)
     {
-        var rows = analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index).Select(m => Row(m, analysis)).ToList();
+        // Findings by line, once: each row reads its own lines, so the schedule is linear in the list.
+        var byLine = analysis.Findings.ToLookup(f => f.Range.Start.Line);
+        var rows = analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index).Select(m => Row(m, byLine)).ToList();
         var feeders = analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index).Select(Totals).ToList();
         return new Schedule(rows, feeders);
     }
 
-    private static ScheduleRow Row(MotorResult m, AnalysisResult analysis)
+    private static ScheduleRow Row(MotorResult m, ILookup<int, Finding> byLine)
     {
-        var findings = analysis.Findings.Where(f => f.Range.Start.Line >= m.Motor.Header.Line.Index && f.Range.Start.Line <= m.Motor.LastLine).ToList();
+        var findings = Enumerable.Range(m.Motor.Header.Line.Index, m.Motor.LastLine - m.Motor.Header.Line.Index + 1).SelectMany(l => byLine[l]).ToList();
         var status = findings.Any(f => f.Severity == Parser.Diagnostics.Severity.Error)
             ? string.Join(" ", findings.Where(f => f.Severity == Parser.Diagnostics.Severity.Error).Select(f => f.Code).Distinct())
             : findings.Any(f => f.Severity == Parser.Diagnostics.Severity.Warning) ? "warnings" : "ok";
