@@ -33,6 +33,13 @@ switch (args)
     case ["open", var megabytes, var motorlang]:
         await LargeOpen.Run(int.Parse(megabytes), motorlang);
         break;
+    case ["generate-plant", var files, var motors, var folder]:
+        Directory.CreateDirectory(folder);
+        PlantTiming.Write(folder, int.Parse(files), int.Parse(motors));
+        break;
+    case ["plant", var files, var motors, var motorlang]:
+        await PlantTiming.Run(int.Parse(files), int.Parse(motors), motorlang);
+        break;
     case ["hostile", var motorlang, ..]:
         HostileLists.Run(motorlang, args.Length > 2 ? int.Parse(args[2]) : 1);
         break;

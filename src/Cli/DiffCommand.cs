@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Text.Json;
 using MotorLang.Analysis;
+using MotorLang.Analysis.Plant;
 using MotorLang.Analysis.Reports;
 using MotorLang.Cli.Output;
 
@@ -11,14 +12,27 @@ public static class DiffCommand
 {
     public static Command Create(TextWriter stdout)
     {
-        var oldArg = new Argument<string>("old") { Description = "A file, or a git revision and path such as HEAD~1:plant.motors" };
-        var newArg = new Argument<string>("new") { Description = "A file, or a git revision and path" };
+        var oldArg = new Argument<string>("old") { Description = "A file, or a git revision and path such as HEAD~1:plant.motors; for a plant, also a bare revision such as HEAD~1" };
+        var newArg = new Argument<string>("new") { Description = "A file, a plant (a folder or a file of it), or a git revision and path" };
         var format = new Option<string>("--format") { Description = "text or json", DefaultValueFactory = _ => "text" };
         format.AcceptOnlyFromAmong("text", "json");
         var exitCode = new Option<bool>("--exit-code") { Description = "Exit 1 when the versions differ, 0 when they do not" };
-        var command = new Command("diff", "Compare two versions of a motor list by tag") { oldArg, newArg, format, exitCode };
+        var command = new Command("diff", "Compare two versions of a motor list or a plant by tag") { oldArg, newArg, format, exitCode };
         command.SetAction(result =>
         {
+            using var sides = new PlantDiffInputs();
+            if (PlantSides(sides, result.GetValue(oldArg)!, result.GetValue(newArg)!) is { } plants)
+            {
+                var plantChanges = PlantDiff.Compare(plants.Before, plants.After);
+                if (result.GetValue(format) == "json")
+                    stdout.WriteLine(JsonSerializer.Serialize(plantChanges, JsonReport.Options));
+                else if (plantChanges.Count == 0)
+                    stdout.WriteLine("no changes");
+                else
+                    foreach (var line in PlantDiff.Describe(plantChanges)) stdout.WriteLine(line);
+                return result.GetValue(exitCode) && plantChanges.Count > 0 ? ExitCodes.Findings : ExitCodes.Clean;
+            }
+
             var before = Analyzer.Analyze(Read(result.GetValue(oldArg)!));
             var after = Analyzer.Analyze(Read(result.GetValue(newArg)!));
             var changes = ListDiff.Compare(before, after);
@@ -31,6 +45,25 @@ public static class DiffCommand
             return result.GetValue(exitCode) && changes.Count > 0 ? ExitCodes.Findings : ExitCodes.Clean;
         });
         return command;
+    }
+
+    /// <summary>
+    /// The two plants to compare when NEW is a folder or a file of a plant (docs/format.md, Plants),
+    /// or null to compare two files. OLD is then a path on disk, REV:PATH, or a bare revision
+    /// (NEW's plant folder at that revision); a folder that holds no plant is refused.
+    /// </summary>
+    private static (PlantAnalysis Before, PlantAnalysis After)? PlantSides(PlantDiffInputs sides, string oldSpec, string newSpec)
+    {
+        if (sides.Local(newSpec) is not { } local) return null;
+        var root = PlantDiffInputs.PlantRoot(local.Path);
+        if (root is null)
+        {
+            if (Directory.Exists(local.Path)) throw new CliException($"'{newSpec}' is a folder that holds no plant: diff compares two files or two plants");
+            return null;
+        }
+
+        var oldRoot = sides.OldRoot(oldSpec, root, local.Top);
+        return (PlantDiffInputs.Analyze(oldRoot).Analysis, PlantDiffInputs.Analyze(root).Analysis);
     }
 
     /// <summary>A path on disk, or REV:PATH read with `git show` from the current folder's repository.</summary>
