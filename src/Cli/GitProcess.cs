@@ -2,7 +2,7 @@ using System.Diagnostics;
 
 namespace MotorLang.Cli;
 
-/// <summary>Runs git in a folder (for the revisions of a plant): its exit code, standard output (bytes) and standard error.</summary>
+/// <summary>Runs git in a folder for the revisions of a plant: its exit code, standard output as bytes (a tar archive, which <see cref="Git"/>, reading text, cannot carry) and standard error.</summary>
 internal static class GitProcess
 {
     public static (int Code, byte[] Out, string Err) Run(string folder, params string[] args)
