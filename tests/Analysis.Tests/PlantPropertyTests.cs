@@ -41,7 +41,7 @@ public sealed class PlantPropertyTests
             return bom ? "\uFEFF" + text : text;
         });
 
-    private static readonly Gen<string[]> Plants = Gen.Int[1, 4].SelectMany(n =>
+    internal static readonly Gen<string[]> Plants = Gen.Int[1, 4].SelectMany(n =>
         Gen.Select(File(0, n), File(1, n), File(2, n), File(3, n)).Select((a, b, c, d) =>
         {
             var texts = new[] { a, b, c, d }.Take(n).ToArray();

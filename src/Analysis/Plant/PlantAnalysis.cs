@@ -14,8 +14,11 @@ public sealed class PlantAnalysis
     private readonly Dictionary<string, int> _index;
 
     internal PlantAnalysis(IReadOnlyList<PlantFile> files, PlantJoin? join, AnalysisResult? joined, ImmutableArray<PlantFinding> findings,
-        IReadOnlySet<string> apart, ImmutableArray<(string File, Acknowledgement Acknowledgement)> acknowledged)
+        IReadOnlySet<string> apart, ImmutableArray<(string File, Acknowledgement Acknowledgement)> acknowledged,
+        IReadOnlyList<PlantLeftOut> leftOut, IReadOnlyDictionary<string, AnalysisResult> apartAnalyses)
     {
+        LeftOut = leftOut;
+        ApartAnalyses = apartAnalyses;
         Acknowledged = acknowledged;
         Files = files;
         _join = join;
@@ -24,6 +27,14 @@ public sealed class PlantAnalysis
         Apart = apart;
         _index = files.Select((f, i) => (f.Name, i)).ToDictionary(p => p.Name, p => p.i, StringComparer.Ordinal);
     }
+
+    internal PlantJoin? Join => _join;
+
+    /// <summary>The files under the folder left out of the plant, as given.</summary>
+    internal IReadOnlyList<PlantLeftOut> LeftOut { get; }
+
+    /// <summary>The analyses of the files that were analysed on their own (<see cref="Apart"/>).</summary>
+    internal IReadOnlyDictionary<string, AnalysisResult> ApartAnalyses { get; }
 
     /// <summary>The plant's files, the plant file first.</summary>
     public IReadOnlyList<PlantFile> Files { get; }
@@ -60,7 +71,7 @@ public sealed class PlantAnalysis
 
     /// <summary>A range in one file as a range of <see cref="Joined"/>.</summary>
     public SourceRange ToJoined(string file, SourceRange range) =>
-        _join is not null && _index.TryGetValue(file, out var i) && !Apart.Contains(file)
+        _join is not null && _index.ContainsKey(file) && !Apart.Contains(file) && _join.IndexOf(file) is var i and >= 0
             ? _join.ToJoined(i, range)
             : throw new ArgumentException($"'{file}' is not a joined file of this plant", nameof(file));
 

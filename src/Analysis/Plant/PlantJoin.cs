@@ -15,16 +15,43 @@ internal sealed class PlantJoin
     private readonly int[] _lineCounts;
     private readonly bool[] _addedBreak;
 
-    private PlantJoin(IReadOnlyList<PlantFile> files, string text, int[] starts, int[] lineCounts, bool[] addedBreak)
+    private string? _text;
+
+    private PlantJoin(IReadOnlyList<PlantFile> files, string? text, int[] starts, int[] lineCounts, bool[] addedBreak)
     {
         _files = files;
-        Text = text;
+        _text = text;
         _starts = starts;
         _lineCounts = lineCounts;
         _addedBreak = addedBreak;
     }
 
-    public string Text { get; }
+    /// <summary>The joined text (after <see cref="WithFile"/>, joined again only when asked).</summary>
+    public string Text => _text ??= Of(_files)._text!;
+
+    /// <summary>The index of a joined file, or -1.</summary>
+    public int IndexOf(string name)
+    {
+        for (var i = 0; i < _files.Count; i++)
+        {
+            if (_files[i].Name == name) return i;
+        }
+
+        return -1;
+    }
+
+    public PlantFile File(int index) => _files[index];
+
+    /// <summary>
+    /// The join after file <paramref name="index"/>'s text changed inside one line: the same lines in
+    /// the same places, so the line map is shared; the joined text is made again only if asked for.
+    /// </summary>
+    public PlantJoin WithFile(int index, PlantFile file)
+    {
+        var files = _files.ToArray();
+        files[index] = file;
+        return new PlantJoin(files, null, _starts, _lineCounts, _addedBreak);
+    }
 
     public IReadOnlyList<int> Starts => _starts;
 

@@ -55,14 +55,20 @@ internal sealed class PlantService(DocumentStore store)
         }).ToList();
         var key = folder.Members.SelectMany(m => new object[] { m.Name, m.Text })
             .Concat(folder.LeftOut.SelectMany(s => new object[] { s.Path, s.Reason })).ToArray();
+        (object[] Key, PlantView View) known;
         lock (_gate)
         {
-            if (_cache.TryGetValue(root, out var known) && SameKey(known.Key, key))
+            if (_cache.TryGetValue(root, out known) && SameKey(known.Key, key))
                 return known.View with { Files = files };
         }
 
-        var analysis = PlantAnalyzer.Analyze(folder.Members.Select(m => new PlantFile(m.Name, m.Text)).ToList(),
-            folder.LeftOut.Select(s => new PlantLeftOut(folder.NameOf(s.Path), s.Reason)).ToList());
+        // One file's text changed (the usual case: a keystroke in an open file): update the previous
+        // analysis from that file's edited line when the edit allows it, as for a single document.
+        var analysis = (known.Key is not null && OneTextChanged(known.Key, key, folder.Members.Count) is { } changed
+                ? PlantAnalyzer.Update(known.View.Analysis, changed.Name, changed.Text)
+                : null)
+            ?? PlantAnalyzer.Analyze(folder.Members.Select(m => new PlantFile(m.Name, m.Text)).ToList(),
+                folder.LeftOut.Select(s => new PlantLeftOut(folder.NameOf(s.Path), s.Reason)).ToList());
         var view = new PlantView(root, analysis, files);
         lock (_gate) _cache[root] = (key, view);
         return view;
@@ -74,6 +80,22 @@ internal sealed class PlantService(DocumentStore store)
     /// <summary>The local path of a file: URI, or null for any other scheme.</summary>
     public static string? PathOf(string uri) =>
         Uri.TryCreate(uri, UriKind.Absolute, out var u) && u.IsFile ? Path.GetFullPath(u.LocalPath) : null;
+
+    /// <summary>The file whose text alone differs between two keys of the same files and left-out entries, or null.</summary>
+    private static (string Name, string Text)? OneTextChanged(object[] before, object[] now, int members)
+    {
+        if (before.Length != now.Length) return null;
+        (string, string)? changed = null;
+        for (var i = 0; i < now.Length; i++)
+        {
+            if (ReferenceEquals(before[i], now[i]) || Equals(before[i], now[i])) continue;
+            // Only a member's text (odd places among the members' name, text pairs) may differ, and only one.
+            if (changed is not null || i >= 2 * members || i % 2 == 0) return null;
+            changed = ((string)now[i - 1], (string)now[i]);
+        }
+
+        return changed;
+    }
 
     /// <summary>The same names and texts (the same string object, usually; equal text read again costs one comparison).</summary>
     private static bool SameKey(object[] a, object[] b)
