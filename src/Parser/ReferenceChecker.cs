@@ -8,7 +8,7 @@ namespace MotorLang.Parser;
 /// Checks that 'from' names a feeder and 'like' names a motor, and that neither goes round in a
 /// circle. Linear in the number of blocks: each reference is followed once (see <see cref="ReferenceCycles"/>).
 /// </summary>
-internal sealed class ReferenceChecker(MotorList model, List<Diagnostic> diagnostics)
+internal sealed class ReferenceChecker(MotorList model, List<Diagnostic> diagnostics, Func<int, string> lineName)
 {
     /// <summary>
     /// "Did you mean" compares the unknown tag with every tag of its kind; past this many
@@ -25,7 +25,7 @@ internal sealed class ReferenceChecker(MotorList model, List<Diagnostic> diagnos
     public void Check()
     {
         var feeders = model.Feeders;
-        var feederCycles = CycleMembers(feeders, n => Target<FeederNode>(n.From));
+        var feederCycles = FirstOfEachCycle(CycleMembers(feeders, n => Target<FeederNode>(n.From)), n => Target<FeederNode>(n.From));
         List<string>? feederTags = null;
         foreach (var feeder in feeders)
         {
@@ -33,7 +33,7 @@ internal sealed class ReferenceChecker(MotorList model, List<Diagnostic> diagnos
         }
 
         var motors = model.Motors.ToList();
-        var motorCycles = CycleMembers(motors, n => Target<MotorNode>(n.Like));
+        var motorCycles = FirstOfEachCycle(CycleMembers(motors, n => Target<MotorNode>(n.Like)), n => Target<MotorNode>(n.Like));
         List<string>? motorTags = null;
         foreach (var motor in motors)
         {
@@ -61,10 +61,56 @@ internal sealed class ReferenceChecker(MotorList model, List<Diagnostic> diagnos
             return;
         }
 
-        // Reported once per member, on the member's own reference.
+        // One diagnostic per cycle, on the reference written first (in a plant: in the first file),
+        // naming every member and where it is written, so a loop through several files reads as
+        // one mistake, not one per file. Each member's own sizing notes point back to it.
         if (cycles.Contains(node))
             diagnostics.Add(new Diagnostic(SyntaxCodes.ReferenceCycle, Severity.Error, reference.Range,
-                $"'{keyword} {reference.Value}' leads back to '{node.Tag?.Value}': the chain of '{keyword}' goes round in a circle"));
+                $"'{keyword} {reference.Value}' leads back to '{node.Tag?.Value}': the chain of '{keyword}' goes round in a circle: {Loop(node, n => Target<T>(Reference(n, keyword)))}"));
+    }
+
+    private static Located<string>? Reference(CircuitNode n, string keyword) => keyword == "from" ? (n as FeederNode)?.From : (n as MotorNode)?.Like;
+
+    /// <summary>
+    /// The member of each cycle whose header comes first. Each cycle is walked once, its members
+    /// marked as it goes, so finding them all is linear in the number of members.
+    /// </summary>
+    private HashSet<T> FirstOfEachCycle<T>(HashSet<T> members, Func<T, T?> next) where T : CircuitNode
+    {
+        var firsts = new HashSet<T>(ReferenceEqualityComparer.Instance);
+        var seen = new HashSet<T>(ReferenceEqualityComparer.Instance);
+        foreach (var start in members)
+        {
+            if (!seen.Add(start)) continue;
+            var first = start;
+            for (var n = next(start); n is not null && seen.Add(n); n = next(n))
+            {
+                Steps++;
+                if (n.Header.Line.Index < first.Header.Line.Index) first = n;
+            }
+
+            firsts.Add(first);
+        }
+
+        return firsts;
+    }
+
+    /// <summary>"A (line 3) → B (b.motors line 1) → A": every member once, then back to the first.</summary>
+    private string Loop<T>(T first, Func<T, T?> next) where T : CircuitNode
+    {
+        // A long loop is named by its first members and a count, so the message stays readable.
+        const int shown = 8;
+        var parts = new List<string>();
+        var count = 0;
+        for (T? n = first; n is not null; n = next(n))
+        {
+            Steps++;
+            if (++count <= shown) parts.Add($"{n.Tag?.Value} ({lineName(n.Header.Line.Index)})");
+            if (ReferenceEquals(next(n), first)) break;
+        }
+
+        if (count > shown) parts.Add($"{count - shown} more");
+        return string.Join(" → ", parts) + $" → {first.Tag?.Value}";
     }
 
     private string Suggest(string tag, Func<List<string>> candidates)

@@ -51,7 +51,7 @@ internal sealed class StructureBuilder(StatementParser statements, List<Diagnost
         }
 
         var model = new MotorList(_project, _feeders, _byTag);
-        new ReferenceChecker(model, diagnostics).Check();
+        new ReferenceChecker(model, diagnostics, LineName).Check();
         return model;
     }
 

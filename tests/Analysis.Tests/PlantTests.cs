@@ -68,13 +68,16 @@ public sealed class PlantTests
     }
 
     [Fact]
-    public void ACycleAcrossFilesIsReportedOnEachFromWhereItIsWritten()
+    public void ACycleAcrossFilesIsOneDiagnosticNamingEachMembersFile()
     {
         var a = AnalysisFixture.Text("project \"P\"", "  plant", "feeder A 480V 3ph", "  from B");
         var b = AnalysisFixture.Text("feeder B 480V 3ph", "  from A");
         var plant = Analyze(("a.motors", a), ("b.motors", b));
         Assert.Equal(["4:8-4:9 P016"], Codes(plant, "a.motors").Where(c => c.EndsWith("P016")));
-        Assert.Equal(["2:8-2:9 P016"], Codes(plant, "b.motors").Where(c => c.EndsWith("P016")));
+        Assert.EndsWith("A (line 3 of a.motors) → B (line 1 of b.motors) → A", Assert.Single(plant.FindingsOf("a.motors"), f => f.Code == "P016").Message);
+        // B's file has no second P016: its feeder's sizing note points to the one diagnostic.
+        Assert.DoesNotContain(plant.FindingsOf("b.motors"), f => f.Code == "P016");
+        Assert.Contains(plant.FindingsOf("b.motors"), f => f.Code == "M204" && f.Message.Contains("P016"));
     }
 
     [Fact]
