@@ -31,7 +31,7 @@ internal sealed class PlantDiffInputs : IDisposable
         var top = Unpack(spec[..colon]);
         var path = spec[(colon + 1)..];
         if (path.StartsWith("./", StringComparison.Ordinal) || path.StartsWith("../", StringComparison.Ordinal) || path is "." or "..")
-            path = Path.Combine(GitProcess.Text(".", "rev-parse", "--show-prefix"), path);
+            path = Path.Combine(Git.Text(".", "rev-parse", "--show-prefix"), path);
         var full = Path.GetFullPath(Path.Combine(top, path));
         if (!Inside(full, top)) throw new CliException($"'{spec}' leads out of the repository");
         return (full, top);
@@ -70,12 +70,13 @@ internal sealed class PlantDiffInputs : IDisposable
     private string Unpack(string revision)
     {
         if (_revisions.TryGetValue(revision, out var known)) return known;
-        var repository = GitProcess.Text(".", "rev-parse", "--show-toplevel");
+        var repository = Git.Text(".", "rev-parse", "--show-toplevel");
         var temp = TempFolder.Create("motorlang-revision-");
         _temps.Add(temp);
         // The top of the copy stops the upward search for a plant file, as the repository's does.
         Directory.CreateDirectory(Path.Combine(temp.Path, ".git"));
-        var (code, archive, error) = GitProcess.Run(repository, "archive", "--format=tar", revision, "--", ":(glob)**/*" + SourceFiles.Extension);
+        var (code, archive, error) = Git.Run(repository, "archive", "--format=tar", revision, "--", ":(glob)**/*" + SourceFiles.Extension);
+        if (code == -1) throw new CliException("git is not installed, so revisions cannot be read");
         if (code != 0 && !error.Contains("did not match", StringComparison.Ordinal))
             throw new CliException($"git cannot read revision '{revision}': {error}");
         if (code == 0)
@@ -97,7 +98,7 @@ internal sealed class PlantDiffInputs : IDisposable
     private static string? TopOf(string path)
     {
         var folder = Directory.Exists(path) ? path : Path.GetDirectoryName(path)!;
-        var (code, output, _) = GitProcess.Run(folder, "rev-parse", "--show-toplevel");
+        var (code, output, _) = Git.Run(folder, "rev-parse", "--show-toplevel");
         return code == 0 ? System.Text.Encoding.UTF8.GetString(output).Trim() : null;
     }
 
