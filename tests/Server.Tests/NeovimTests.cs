@@ -7,6 +7,7 @@ namespace MotorLang.Server.Tests;
 /// .ci/run installs Neovim; on a machine without it the test is reported as skipped (never in CI,
 /// where a missing Neovim fails it).
 /// </summary>
+[System.Runtime.Versioning.UnsupportedOSPlatform("windows")]
 public class NeovimTests
 {
     [SkippableFact]
@@ -44,6 +45,68 @@ public class NeovimTests
             Assert.Contains("SAW-1", hover);
             Assert.Contains("NEC 430.22", hover);
             Assert.Contains("14 AWG carries only 15 A", hover);
+        }
+        finally
+        {
+            Directory.Delete(dir, recursive: true);
+        }
+    }
+
+    /// <summary>The first ```lua block after the README's "**Neovim**" paragraph, exactly as written.</summary>
+    private static string ReadmeSnippet()
+    {
+        var readme = File.ReadAllText(Path.Combine(Fixture.Root, "README.md"));
+        var at = readme.IndexOf("**Neovim**", StringComparison.Ordinal);
+        Assert.True(at >= 0, "README has no Neovim set-up");
+        var start = readme.IndexOf("```lua\n", at, StringComparison.Ordinal) + "```lua\n".Length;
+        return readme[start..readme.IndexOf("```", start, StringComparison.Ordinal)];
+    }
+
+    [SkippableFact]
+    public async Task TheReadmeSnippetSetsUpMotorListsAndStartsOneServerPerFolder()
+    {
+        var nvim = FindOnPath("nvim");
+        var inCi = Environment.GetEnvironmentVariable("CI") == "true";
+        Skip.If(nvim is null && !inCi, "Neovim is not installed (apt-get install neovim); .ci/run installs it");
+        Assert.True(nvim is not null, "CI must have Neovim: .ci/run installs it");
+
+        var dir = Directory.CreateTempSubdirectory("motorlang-nvim-readme-").FullName;
+        try
+        {
+            var lists = Directory.CreateDirectory(Path.Combine(dir, "lists")).FullName;
+            var file = Path.Combine(lists, "shop.motors");
+            File.Copy(Path.Combine(Fixture.Root, "examples", "cabinet-shop.motors"), file);
+            var second = Path.Combine(lists, "shop-2.motors");
+            File.Copy(Path.Combine(Fixture.Root, "examples", "cabinet-shop.motors"), second);
+            var snippet = Path.Combine(dir, "motorlang.lua");
+            File.WriteAllText(snippet, ReadmeSnippet());
+            // The snippet runs `motorlang` from PATH: here the built server, as the README's Install puts it there.
+            var bin = Directory.CreateDirectory(Path.Combine(dir, "bin")).FullName;
+            var wrapper = Path.Combine(bin, "motorlang");
+            File.WriteAllText(wrapper, $"#!/bin/sh\nexec dotnet exec '{Path.Combine(AppContext.BaseDirectory, "motorlang.dll")}' \"$@\"\n");
+            File.SetUnixFileMode(wrapper, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute);
+            var output = Path.Combine(dir, "out.txt");
+            var info = new ProcessStartInfo(nvim!, ["--headless", "--noplugin", "-u", "NONE", "-c", $"luafile {Path.Combine(AppContext.BaseDirectory, "Neovim", "readme.lua")}"])
+            {
+                RedirectStandardOutput = true, RedirectStandardError = true, RedirectStandardInput = true, UseShellExecute = false,
+            };
+            info.Environment["PATH"] = bin + ":" + Environment.GetEnvironmentVariable("PATH");
+            info.Environment["MOTORLANG_SNIPPET"] = snippet;
+            info.Environment["MOTORLANG_FILE"] = file;
+            info.Environment["MOTORLANG_SECOND"] = second;
+            info.Environment["MOTORLANG_OUT"] = output;
+            using var process = Process.Start(info)!;
+            using var cts = new CancellationTokenSource(TimeSpan.FromMinutes(3));
+            await process.WaitForExitAsync(cts.Token);
+            var lines = await File.ReadAllLinesAsync(output);
+
+            Assert.Contains("snippet-loaded true", lines);
+            Assert.Contains("filetype motorlang", lines);
+            Assert.Contains("indent expandtab=true shiftwidth=2 softtabstop=2", lines);
+            Assert.Contains("diagnostics-arrived true", lines);
+            Assert.Contains(lines, l => l.StartsWith("diagnostic 18:10 M101 wire 14 AWG carries 15 A here", StringComparison.Ordinal));
+            Assert.Contains("clients 1", lines);
+            Assert.DoesNotContain("second-diagnostics 0", lines);
         }
         finally
         {
