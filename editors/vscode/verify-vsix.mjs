@@ -1,20 +1,43 @@
-// Checks that the packaged extension holds the server, the grammar and the bundled client.
+// Checks that the packaged extension holds the server, the grammar and the bundled client, and
+// nothing else: no launcher, debug symbols, translated resources, sources or tests it never uses.
 import { execFileSync } from "node:child_process";
 
-const listing = execFileSync("python3", ["-m", "zipfile", "-l", "motorlang.vsix"], { encoding: "utf8" });
+const entries = execFileSync("python3", ["-c",
+  "import sys, zipfile; print('\\n'.join(zipfile.ZipFile(sys.argv[1]).namelist()))", "motorlang.vsix"], { encoding: "utf8" })
+  .split("\n").filter((line) => line.length > 0);
 const required = [
   "extension/server/motorlang.dll",
   "extension/server/MotorLang.Server.dll",
   "extension/server/motorlang.runtimeconfig.json",
+  "extension/server/motorlang.deps.json",
   "extension/syntaxes/motorlang.tmLanguage.json",
   "extension/snippets/motorlang.json",
   "extension/language-configuration.json",
   "extension/dist/extension.js",
   "extension/readme.md",
 ];
-const missing = required.filter((f) => !listing.includes(f));
-if (missing.length > 0) {
-  console.error(`motorlang.vsix is missing: ${missing.join(", ")}`);
+// Everything the extension uses at run time, and the two files every .vsix has.
+const allowed = [
+  /^\[Content_Types\]\.xml$/,
+  /^extension\.vsixmanifest$/,
+  /^extension\/(package\.json|readme\.md|language-configuration\.json)$/,
+  /^extension\/dist\/extension\.js$/,
+  /^extension\/server\/[^/]+\.dll$/,
+  /^extension\/server\/motorlang\.(deps|runtimeconfig)\.json$/,
+  /^extension\/snippets\/[^/]+\.json$/,
+  /^extension\/syntaxes\/[^/]+\.json$/,
+];
+const missing = required.filter((f) => !entries.includes(f));
+const unused = entries.filter((f) => !allowed.some((pattern) => pattern.test(f)));
+if (missing.length > 0 || unused.length > 0) {
+  if (missing.length > 0) console.error(`motorlang.vsix is missing: ${missing.join(", ")}`);
+  if (unused.length > 0) console.error(`motorlang.vsix holds files it never uses (.vscodeignore, or the server publish): ${unused.join(", ")}`);
   process.exit(1);
 }
-console.log(`motorlang.vsix holds all ${required.length} required files`);
+const runtimeConfig = JSON.parse(execFileSync("python3", ["-c",
+  "import sys, zipfile; sys.stdout.write(zipfile.ZipFile(sys.argv[1]).read('extension/server/motorlang.runtimeconfig.json').decode())", "motorlang.vsix"], { encoding: "utf8" }));
+if (runtimeConfig.runtimeOptions?.rollForward !== "Major") {
+  console.error("the server's runtimeconfig does not roll forward to newer .NET majors (RollForward=Major)");
+  process.exit(1);
+}
+console.log(`motorlang.vsix holds the ${required.length} required files and nothing unused (${entries.length} entries)`);

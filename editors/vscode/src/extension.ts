@@ -14,9 +14,26 @@ import {
 } from "vscode-languageclient/node";
 import { clickedLine, outcome, previewHtml, runWithInput, stdinArgs } from "./cli";
 import { commandTarget, ExtensionSettings, findRuntime, resolveServer, runtimeProblem, serverEnvironment, serverSettings } from "./config";
+import { commandProblem, Notice, ServerState } from "./status";
 
 let client: LanguageClient | undefined;
 let output: vscode.OutputChannel;
+/** Why the server is not running, when it failed to start or stopped for good; undefined while it runs. */
+let stoppedBecause: string | undefined;
+
+function serverState(): ServerState {
+  return client?.isRunning() ? { running: true } : { running: false, reason: stoppedBecause };
+}
+
+/** Shows a notice; "Retry" starts the server again. */
+function tell(notice: Notice, error = false): void {
+  const show = error ? vscode.window.showErrorMessage : vscode.window.showInformationMessage;
+  const actions = notice.retry ? ["Retry", "Show log"] : [];
+  void show(notice.message, ...actions).then((choice) => {
+    if (choice === "Retry") void vscode.commands.executeCommand("motorlang.restartServer");
+    else if (choice === "Show log") output.show();
+  });
+}
 
 function readSettings(): ExtensionSettings {
   const c = vscode.workspace.getConfiguration("motorlang");
@@ -39,10 +56,12 @@ async function start(context: vscode.ExtensionContext): Promise<void> {
   if (server.command.endsWith("dotnet") || server.args[0]?.endsWith(".dll")) {
     const problem = runtimeProblem(findRuntime(await run(server.command, ["--list-runtimes"])), server.command);
     if (problem) {
-      void vscode.window.showErrorMessage(problem);
+      stoppedBecause = problem;
+      tell({ message: problem, retry: true }, true);
       return;
     }
   }
+  stoppedBecause = undefined;
 
   const serverOptions: ServerOptions = { command: server.command, args: server.args, transport: TransportKind.stdio, options: { env: serverEnvironment(process.env) } };
   let crashes = 0;
@@ -55,21 +74,28 @@ async function start(context: vscode.ExtensionContext): Promise<void> {
       closed: () => {
         crashes++;
         if (crashes <= 4) return { action: CloseAction.Restart };
-        void vscode.window.showErrorMessage("The MotorLang server stopped repeatedly. See the MotorLang output channel for its log.", "Show log")
-          .then((choice) => choice && output.show());
+        stoppedBecause = "It stopped repeatedly; the MotorLang output channel has its log.";
+        tell({ message: `The MotorLang server stopped repeatedly. See the MotorLang output channel for its log.`, retry: true }, true);
         return { action: CloseAction.DoNotRestart };
       },
     },
   };
   client = new LanguageClient("motorlang", "MotorLang", serverOptions, clientOptions);
-  await client.start();
+  try {
+    await client.start();
+  } catch (e) {
+    // A server path that does not exist or is not executable: say so, keep the editor usable.
+    stoppedBecause = `It could not be started (${server.command}): ${e instanceof Error ? e.message : String(e)}`;
+    tell({ message: `The MotorLang server could not be started. ${stoppedBecause}`, retry: true }, true);
+  }
 }
 
 async function sizeEverything(arg: unknown): Promise<void> {
   const editor = vscode.window.activeTextEditor;
   const target = commandTarget(arg, editor?.document.uri.toString(), editor?.document.languageId);
-  if (!target || !editor || !client) {
-    void vscode.window.showInformationMessage("Open a .motors file to size it.");
+  const problem = commandProblem(serverState(), editor ? target : undefined, "size it");
+  if (problem || !target || !client) {
+    if (problem) tell(problem, problem.retry);
     return;
   }
   // Asked of the server directly: it offers "size everything" without its edit and fills the edit
@@ -93,8 +119,11 @@ async function sizeEverything(arg: unknown): Promise<void> {
 async function targetDocument(arg: unknown, what: string): Promise<vscode.TextDocument | undefined> {
   const editor = vscode.window.activeTextEditor;
   const target = commandTarget(arg, editor?.document.uri.toString(), editor?.document.languageId);
-  if (!target) {
-    void vscode.window.showInformationMessage(`Open a .motors file to see its ${what}.`);
+  // The schedule and report come from the command line, but on the same runtime as the server:
+  // when the server is not running, that is the problem to name.
+  const problem = commandProblem(serverState(), target, `see its ${what}`);
+  if (problem || !target) {
+    if (problem) tell(problem, problem.retry);
     return undefined;
   }
   return vscode.workspace.openTextDocument(vscode.Uri.parse(target));
@@ -178,7 +207,8 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
   context.subscriptions.push(
     output,
     vscode.commands.registerCommand("motorlang.restartServer", async () => {
-      await client?.stop();
+      // A client that never started (or stopped for good) may refuse to stop; it is replaced either way.
+      await client?.stop().catch(() => undefined);
       client = undefined;
       await start(context);
     }),
