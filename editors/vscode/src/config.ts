@@ -18,11 +18,15 @@ export interface ServerCommand {
 
 /**
  * Chooses the server to run. A configured path is honoured only in a trusted workspace (a workspace
- * could otherwise make the editor run any program); otherwise the server bundled in the extension.
+ * could otherwise make the editor run any program); otherwise the server bundled in the extension:
+ * its self-contained executable (`bundledExecutable`, the file name, in a platform package) or its
+ * assemblies run by the installed runtime (the universal package).
  * A .dll runs through dotnet; anything else is run directly (a published executable).
  */
-export function resolveServer(settings: ExtensionSettings, extensionDir: string, trusted: boolean): ServerCommand {
+export function resolveServer(settings: ExtensionSettings, extensionDir: string, trusted: boolean, bundledExecutable?: string): ServerCommand {
   const configured = trusted ? settings.serverPath.trim() : "";
+  // A platform package carries the server as one self-contained executable: it needs no runtime.
+  if (!configured && bundledExecutable) return { command: path.join(extensionDir, "server", bundledExecutable), args: ["lsp"] };
   const dotnet = (trusted && settings.dotnetPath.trim()) || "dotnet";
   const server = configured || path.join(extensionDir, "server", "motorlang.dll");
   return server.toLowerCase().endsWith(".dll")

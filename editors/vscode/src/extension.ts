@@ -1,4 +1,6 @@
 import { execFile } from "child_process";
+import * as fs from "fs";
+import * as path from "path";
 import * as vscode from "vscode";
 import {
   CloseAction,
@@ -46,13 +48,28 @@ function readSettings(): ExtensionSettings {
   };
 }
 
+/** The self-contained server's file name when this is a platform package that carries one, made executable if the unpacking lost its mode. */
+function bundledExecutable(extensionPath: string): string | undefined {
+  const name = process.platform === "win32" ? "motorlang.exe" : "motorlang";
+  const file = path.join(extensionPath, "server", name);
+  if (!fs.existsSync(file)) return undefined;
+  if (process.platform !== "win32") {
+    try {
+      fs.accessSync(file, fs.constants.X_OK);
+    } catch {
+      fs.chmodSync(file, 0o755);
+    }
+  }
+  return name;
+}
+
 function run(command: string, args: string[]): Promise<string> {
   return new Promise((resolve) => execFile(command, args, { timeout: 15000 }, (error, stdout) => resolve(error ? "" : stdout)));
 }
 
 async function start(context: vscode.ExtensionContext): Promise<void> {
   const settings = readSettings();
-  const server = resolveServer(settings, context.extensionPath, vscode.workspace.isTrusted);
+  const server = resolveServer(settings, context.extensionPath, vscode.workspace.isTrusted, bundledExecutable(context.extensionPath));
   if (server.command.endsWith("dotnet") || server.args[0]?.endsWith(".dll")) {
     const problem = runtimeProblem(findRuntime(await run(server.command, ["--list-runtimes"])), server.command);
     if (problem) {
@@ -131,7 +148,7 @@ async function targetDocument(arg: unknown, what: string): Promise<vscode.TextDo
 
 /** Runs a reporting command of the command line on the buffer's text, passed on standard input. */
 async function runOnBuffer(context: vscode.ExtensionContext, document: vscode.TextDocument, command: string[]) {
-  const server = resolveServer(readSettings(), context.extensionPath, vscode.workspace.isTrusted);
+  const server = resolveServer(readSettings(), context.extensionPath, vscode.workspace.isTrusted, bundledExecutable(context.extensionPath));
   const name = document.uri.scheme === "file" ? document.uri.fsPath : document.uri.toString();
   return outcome(await runWithInput(server.command, stdinArgs(server.args, command, name), document.getText(), 30000, serverEnvironment(process.env)));
 }

@@ -24,6 +24,13 @@ test("a published executable runs directly", () => {
   assert.deepEqual(resolveServer({ ...defaults, serverPath: "/opt/ml/motorlang" }, "/ext", true), { command: "/opt/ml/motorlang", args: ["lsp"] });
 });
 
+test("a platform package's own executable runs directly, with no runtime", () => {
+  assert.deepEqual(resolveServer(defaults, "/ext", true, "motorlang"), { command: path.join("/ext", "server", "motorlang"), args: ["lsp"] });
+  assert.deepEqual(resolveServer(defaults, "/ext", false, "motorlang.exe"), { command: path.join("/ext", "server", "motorlang.exe"), args: ["lsp"] });
+  // A configured server still wins in a trusted workspace.
+  assert.deepEqual(resolveServer({ ...defaults, serverPath: "/opt/ml/motorlang.dll" }, "/ext", true, "motorlang"), { command: "dotnet", args: ["/opt/ml/motorlang.dll", "lsp"] });
+});
+
 test("configured paths are ignored in an untrusted workspace", () => {
   const s = { ...defaults, serverPath: "/tmp/evil", dotnetPath: "/tmp/evil-dotnet" };
   assert.deepEqual(resolveServer(s, "/ext", false), { command: "dotnet", args: [path.join("/ext", "server", "motorlang.dll"), "lsp"] });
