@@ -45,3 +45,6 @@ public enum NameplateBasis { None, LowSpeed, HighTorque, Multispeed, CannedPump,
 
 /// <summary>Code letters of Table 430.7(B). I, O and Q are not used by the table.</summary>
 public enum CodeLetter { A, B, C, D, E, F, G, H, J, K, L, M, N, P, R, S, T, U, V }
+
+/// <summary>What supplies the plant: a utility with a stated fault current, an infinite bus (no impedance ahead of the first transformer), or a generator.</summary>
+public enum SourceKind { Utility, InfiniteBus, Generator }

@@ -27,4 +27,6 @@ public static class SyntaxCodes
     public const string BinaryContent = "P019";
     public const string DuplicateProject = "P020";
     public const string MoreOnLine = "P027";
+    /// <summary>A 'source' missing a value its kind needs, or given one its kind does not take.</summary>
+    public const string SourceValues = "P035";
 }

@@ -121,6 +121,13 @@ public sealed class ProjectNode(Statement header) : BlockNode(header, null)
 
     /// <summary>Written 'plant': the project spans every motor list in its file's folder and below (docs/format.md, Plants).</summary>
     public Statement? Plant => Statement("plant");
+
+    /// <summary>What supplies the plant ('source'), for the available fault current.</summary>
+    public Located<SourceKind>? Source => Get<SourceKind>("source", "kind");
+    public Located<Quantity>? SourceFaultCurrent => Get<Quantity>("source", "fault-current");
+    public Located<Quantity>? SourceXOverR => Get<Quantity>("source", "x-r");
+    public Located<Quantity>? SourceRating => Get<Quantity>("source", "rating");
+    public Located<Quantity>? SourceReactance => Get<Quantity>("source", "reactance");
 }
 
 /// <summary>Circuit attributes shared by feeders and motors.</summary>
@@ -142,6 +149,10 @@ public abstract class CircuitNode(Statement header, BlockNode? parent) : BlockNo
     public Located<bool>? ProtectionCombination => Get<bool>("protection", "combination");
     /// <summary>The fuse is stated to be Class CC.</summary>
     public Located<bool>? ProtectionClassCc => Get<bool>("protection", "class");
+    /// <summary>The short-circuit current rating of the feeder's bus equipment, or of a motor's controller or drive.</summary>
+    public Located<Quantity>? Sccr => Get<Quantity>("sccr", "rating");
+    /// <summary>The interrupting rating of this circuit's protective device.</summary>
+    public Located<Quantity>? Interrupting => Get<Quantity>("interrupting", "rating");
 }
 
 public sealed class FeederNode(Statement header, ProjectNode? project) : CircuitNode(header, project)
@@ -154,6 +165,16 @@ public sealed class FeederNode(Statement header, ProjectNode? project) : Circuit
     public Located<Quantity>? Voltage => Get<Quantity>("feeder", "voltage");
     public Located<Phases>? Phases => Get<Phases>("feeder", "phases");
     public Located<string>? From => Get<string>("from", "source");
+    /// <summary>A transformer at the head of the feeder: the feeder's wire is then its secondary conductors.</summary>
+    public Statement? Transformer => Statement("transformer");
+    public Located<Quantity>? TransformerRating => Get<Quantity>("transformer", "rating");
+    public Located<Quantity>? TransformerPrimary => Get<Quantity>("transformer", "primary");
+    public Located<Quantity>? TransformerSecondary => Get<Quantity>("transformer", "secondary");
+    public Located<Quantity>? TransformerImpedance => Get<Quantity>("transformer", "impedance");
+    public Located<Quantity>? TransformerXOverR => Get<Quantity>("transformer", "x-r");
+    public Located<ProtectiveDevice>? PrimaryProtection => Get<ProtectiveDevice>("primary-protection", "device");
+    public Located<Quantity>? PrimaryProtectionRating => Get<Quantity>("primary-protection", "rating");
+    public Located<Quantity>? PrimaryInterrupting => Get<Quantity>("primary-protection", "interrupting");
     public IReadOnlyList<MotorNode> Motors => _motors;
     public IReadOnlyList<LoadNode> Loads => _loads;
 

@@ -138,6 +138,13 @@ public static class Keywords
         new("non-continuous", false, "counted at 100 % (the default)", "noncontinuous"),
     ];
 
+    public static readonly WordChoice[] SourceKinds =
+    [
+        new("utility", SourceKind.Utility, "a utility supply: give its available fault current at the service (kA) and its X/R"),
+        new("infinite-bus", SourceKind.InfiniteBus, "no impedance ahead of the first transformer: the transformer alone limits the fault current"),
+        new("generator", SourceKind.Generator, "a generator: give its kVA and its subtransient reactance X\"d in %"),
+    ];
+
     private static string? Positive(decimal v) => v > 0 ? null : "must be greater than zero";
     private static string? NotNegative(decimal v) => v >= 0 ? null : "must not be negative";
 
@@ -168,6 +175,11 @@ public static class Keywords
         new("dated", [Project], null, [new("date", ArgKind.Text, true)], "Title block: the date of this revision, as printed (ISO 8601, \"2026-12-03\", reads the same everywhere)."),
         new("prepared-by", [Project], null, [new("name", ArgKind.Text, true)], "Title block: who prepared this revision."),
         new("checked-by", [Project], null, [new("name", ArgKind.Text, true)], "Title block: the qualified person who checked it."),
+        new("source", [Project], null,
+            [new("kind", Word, true, SourceKinds), new("fault-current", FaultCurrent, false, Check: Positive),
+             new("x-r", Ratio, false, Check: Positive), new("rating", ApparentPower, false, Check: Positive),
+             new("reactance", Percent, false, Check: Positive)],
+            "What supplies the plant: utility with its available fault current (kA) and X/R, infinite-bus, or generator with its kVA and subtransient reactance (%)."),
         new("code", [Project, Feeder], null, [new("edition", Word, true, Editions)], "The code edition the file is checked against."),
         new("ambient", Settings, null, [new("temperature", Temperature, true)], "Ambient temperature for conductor correction (Table 310.15(B)(1)(1))."),
         new("conductor", Settings, null,
@@ -193,6 +205,19 @@ public static class Keywords
              new("listing", Word, false, DeviceListings), new("windings", Word, false, WindingScopes),
              new("combination", Word, false, Combinations), new("class", Word, false, FuseClasses)],
             "Short-circuit and ground-fault protective device and its rating; optionally fire-pump-listed, per-winding or both-windings, listed-combination, class-cc."),
+
+        new("transformer", [Feeder], null,
+            [new("rating", ApparentPower, true, Check: Positive), new("primary", Voltage, true, Check: Positive),
+             new("secondary", Voltage, true, Check: Positive), new("impedance", Percent, false, Check: Positive),
+             new("x-r", Ratio, false, Check: Positive)],
+            "A transformer at the head of this feeder: kVA, primary and secondary voltage, %Z and X/R. The feeder's wire is its secondary conductors."),
+        new("primary-protection", [Feeder], null,
+            [new("device", Word, true, Devices), new("rating", Current, true, Check: Positive), new("interrupting", FaultCurrent, false, Check: Positive)],
+            "The transformer's primary protective device, its rating and optionally its interrupting rating (kA)."),
+        new("sccr", [Feeder, Motor], null, [new("rating", FaultCurrent, true, Check: Positive)],
+            "Short-circuit current rating (kA) of the feeder's bus equipment, or of a motor's controller or drive."),
+        new("interrupting", [Feeder, Motor], null, [new("rating", FaultCurrent, true, Check: Positive)],
+            "Interrupting rating (kA) of this circuit's protective device."),
 
         new("nameplate", [Motor], null, [new("current", Current, true, Check: Positive)], "Nameplate full-load amperes (FLA), used for overloads."),
         new("service-factor", [Motor], null,

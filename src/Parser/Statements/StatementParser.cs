@@ -100,6 +100,8 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
             Error(SyntaxCodes.UnexpectedValue, line.Tokens[0].Range, "give a load's current or its kVA, not both");
         }
 
+        if (spec.Keyword == "source") CheckSource(line, spec, filled);
+
         if (_notShown > 0)
             diagnostics.Add(new Diagnostic(SyntaxCodes.MoreOnLine, Severity.Error, SourceRange.Cover(_notShownFrom, _notShownTo),
                 $"{_notShown} more problem{(_notShown == 1 ? "" : "s")} on this line not shown (at most {MaxProblemsPerLine} are listed per line)"));
@@ -116,6 +118,38 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         return new Statement(line, spec, args.MoveToImmutable());
     }
 
+    /// <summary>Each kind of source takes its own values (P035): a utility its fault current and X/R, a generator its kVA and X"d.</summary>
+    private void CheckSource(SyntaxLine line, KeywordSpec spec, Argument?[] filled)
+    {
+        Argument? Filled(string name) => filled[Array.FindIndex(spec.Args, a => a.Name == name)];
+        if (Filled("kind")?.Value is not SourceKind kind) return;
+        var range = SourceRange.Cover(line.Tokens[0].Range, line.Tokens[^1].Range);
+        (string Arg, string Text)[] needs = kind switch
+        {
+            SourceKind.Utility => [("fault-current", "its available fault current at the service (e.g. 42kA)"), ("x-r", "its X/R (e.g. x/r 8)")],
+            SourceKind.Generator => [("rating", "its kVA (e.g. 500kVA)"), ("reactance", "its subtransient reactance X\"d in % (e.g. 15%)")],
+            _ => [],
+        };
+        string[] takes = kind switch
+        {
+            SourceKind.Utility => ["fault-current", "x-r"],
+            SourceKind.Generator => ["rating", "reactance", "x-r"],
+            _ => [],
+        };
+        var name = Keywords.SourceKinds.First(c => Equals(c.Value, kind)).Canonical;
+        foreach (var (arg, text) in needs)
+        {
+            if (Filled(arg) is null) Error(SyntaxCodes.SourceValues, range, $"'source {name}' needs {text}");
+        }
+
+        foreach (var a in filled)
+        {
+            if (a is null || a.Spec.Name == "kind" || takes.Contains(a.Spec.Name)) continue;
+            Error(SyntaxCodes.SourceValues, a.Range,
+                $"'source {name}' takes no '{a.Canonical}'{(needs.Length == 0 ? "" : $"; it takes {string.Join(" and ", needs.Select(n => n.Text))}")}");
+        }
+    }
+
     private int Place(KeywordSpec spec, Argument?[] filled, Item item)
     {
         switch (item.Value)
@@ -130,6 +164,12 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
                         ? new Argument(a, Phases.Dc, item.Range, "dc")
                         : Choose(a, w.Text, item.Range);
                     return slot;
+                }
+
+                if (IsXOverR(w.Text))
+                {
+                    Error(SyntaxCodes.MissingValue, item.Range, $"'{w.Text}' needs a plain number after it, e.g. 'x/r 8'");
+                    return -1;
                 }
 
                 if (w.Text.Length > 1 && w.Text[0] == '-' && char.IsAsciiDigit(w.Text[1]))
@@ -297,6 +337,8 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         return new Argument(arg, text, item.First.Range, text);
     }
 
+    private static bool IsXOverR(string text) => text.Equals("x/r", StringComparison.OrdinalIgnoreCase);
+
     public static bool IsValidTag(string text) =>
         text.Length > 0 && char.IsLetterOrDigit(text[0]) && text.All(c => char.IsLetterOrDigit(c) || c is '-' or '_' or '.' or '/');
 
@@ -326,6 +368,14 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
             var v = reader.Read(t.Text);
             var hasNext = i + 1 < tokens.Length && tokens[i + 1].Kind == TokenKind.Word;
             var nextWord = hasNext ? tokens[i + 1] : default;
+            // An X/R ratio is the word and then a plain number: "x/r 8".
+            if (hasNext && IsXOverR(t.Text) && reader.Read(nextWord.Text) is LexicalValue.Number { UnitText: "" } ratio)
+            {
+                items.Add(new Item(t, nextWord, ratio with { Unit = Unit.XOverR, UnitText = t.Text }));
+                i++;
+                continue;
+            }
+
             if (v is LexicalValue.Number { UnitText: "" } bare && hasNext && Units.TryParse(nextWord.Text, out var unit))
             {
                 items.Add(new Item(t, nextWord, bare with { Unit = unit, UnitText = nextWord.Text }));
@@ -410,6 +460,8 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         Unit.Minute => kind == ArgKind.Duration,
         Unit.Phase => kind == ArgKind.Phases,
         Unit.Inch => kind == ArgKind.TradeSize,
+        Unit.KiloAmp => kind == ArgKind.FaultCurrent,
+        Unit.XOverR => kind == ArgKind.Ratio,
         _ => kind is ArgKind.Number or ArgKind.Integer,
     };
 
@@ -437,6 +489,8 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         ArgKind.Duration => "a time rating (5min, 15min, 30min or 60min)",
         ArgKind.ApparentPower => "an apparent power (e.g. 15kVA)",
         ArgKind.TradeSize => "a trade size in inches (e.g. 3/4in, 1-1/4in)",
+        ArgKind.FaultCurrent => $"a {a.Name} in kA (e.g. 42kA)",
+        ArgKind.Ratio => "an X/R ratio (e.g. x/r 8)",
         _ => a.Name,
     };
 

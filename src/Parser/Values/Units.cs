@@ -1,7 +1,7 @@
 namespace MotorLang.Parser.Values;
 
 /// <summary>The units the format knows, each with the one spelling the formatter writes.</summary>
-public enum Unit { None, Hp, Kw, Volt, Amp, Foot, Metre, Celsius, Fahrenheit, Percent, Kva, Minute, Phase, Awg, Kcmil, Inch }
+public enum Unit { None, Hp, Kw, Volt, Amp, Foot, Metre, Celsius, Fahrenheit, Percent, Kva, Minute, Phase, Awg, Kcmil, Inch, KiloAmp, XOverR }
 
 public static class Units
 {
@@ -10,7 +10,7 @@ public static class Units
         ["hp"] = Unit.Hp, ["kw"] = Unit.Kw, ["v"] = Unit.Volt, ["a"] = Unit.Amp,
         ["ft"] = Unit.Foot, ["m"] = Unit.Metre, ["c"] = Unit.Celsius, ["°c"] = Unit.Celsius,
         ["f"] = Unit.Fahrenheit, ["°f"] = Unit.Fahrenheit, ["%"] = Unit.Percent, ["kva"] = Unit.Kva,
-        ["min"] = Unit.Minute, ["ph"] = Unit.Phase, ["awg"] = Unit.Awg, ["kcmil"] = Unit.Kcmil, ["mcm"] = Unit.Kcmil, ["in"] = Unit.Inch,
+        ["min"] = Unit.Minute, ["ph"] = Unit.Phase, ["awg"] = Unit.Awg, ["kcmil"] = Unit.Kcmil, ["mcm"] = Unit.Kcmil, ["in"] = Unit.Inch, ["ka"] = Unit.KiloAmp,
     };
 
     public static bool TryParse(string text, out Unit unit) => Spellings.TryGetValue(text, out unit);
@@ -34,7 +34,7 @@ public static class Units
     {
         Unit.Hp => "hp", Unit.Kw => "kW", Unit.Volt => "V", Unit.Amp => "A", Unit.Foot => "ft", Unit.Metre => "m",
         Unit.Celsius => "C", Unit.Fahrenheit => "F", Unit.Percent => "%", Unit.Kva => "kVA", Unit.Minute => "min",
-        Unit.Phase => "ph", Unit.Awg => "AWG", Unit.Kcmil => "kcmil", Unit.Inch => "in", _ => "",
+        Unit.Phase => "ph", Unit.Awg => "AWG", Unit.Kcmil => "kcmil", Unit.Inch => "in", Unit.KiloAmp => "kA", Unit.XOverR => "x/r", _ => "",
     };
 
     /// <summary>What a value with this unit measures, for messages ("expected a current").</summary>
@@ -51,6 +51,8 @@ public static class Units
         Unit.Phase => "a phase count (1ph or 3ph)",
         Unit.Awg or Unit.Kcmil => "a wire size (AWG or kcmil)",
         Unit.Inch => "a raceway trade size (in)",
+        Unit.KiloAmp => "a fault current or short-circuit rating (kA)",
+        Unit.XOverR => "an X/R ratio (x/r 8)",
         _ => "a plain number",
     };
 }

@@ -11,7 +11,8 @@ internal sealed class ValueReader
     public string Canonical(LexicalValue.Number n)
     {
         if (!_canonical.TryGetValue((n.Digits, n.Unit), out var text))
-            _canonical[(n.Digits, n.Unit)] = text = n.Digits + Units.Canonical(n.Unit);
+            // An X/R ratio is written as the word and then the number ("x/r 8"), like the trade writes it.
+            _canonical[(n.Digits, n.Unit)] = text = n.Unit == Unit.XOverR ? "x/r " + n.Digits : n.Digits + Units.Canonical(n.Unit);
         return text;
     }
 
