@@ -16,8 +16,9 @@ public sealed class AnalysisResult
     private readonly LayeredMap<MotorNode, MotorResult> _motors;
 
     internal AnalysisResult(ParseResult parse, LayeredMap<MotorNode, MotorResult> motors, IReadOnlyDictionary<FeederNode, FeederResult> feeders,
-        IReadOnlyList<RankedFinding> ranked, ImmutableArray<Finding> parseFindings, IReadOnlyList<MotorNode> likeUsers)
+        IReadOnlyList<RankedFinding> ranked, ImmutableArray<Finding> parseFindings, IReadOnlyList<MotorNode> likeUsers, Power.FaultStudy power)
     {
+        Power = power;
         Ranked = ranked;
         var findings = ImmutableArray.CreateBuilder<Finding>(ranked.Count);
         foreach (var r in ranked) findings.Add(r.Finding);
@@ -34,6 +35,9 @@ public sealed class AnalysisResult
     public ParseResult Parse { get; }
     public IReadOnlyDictionary<MotorNode, MotorResult> Motors => _motors;
     public IReadOnlyDictionary<FeederNode, FeederResult> Feeders { get; }
+
+    /// <summary>The available fault current at the service, every feeder's bus and every motor's controller, and the checks against it.</summary>
+    public Power.FaultStudy Power { get; }
 
     /// <summary>Syntax diagnostics and sizing findings together, ordered by position; those acknowledged in the list are left out.</summary>
     public ImmutableArray<Finding> Findings { get; }

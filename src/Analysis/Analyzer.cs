@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using MotorLang.Analysis.Findings;
+using MotorLang.Analysis.Power;
 using MotorLang.Analysis.Sizing;
 using MotorLang.Parser.Collections;
 using MotorLang.Parser.Model;
@@ -32,8 +33,10 @@ public static class Analyzer
         AddParseFindings(all, parseFindings);
         foreach (var r in motorMap.Values) AddMotorFindings(all, r);
         foreach (var r in feeders.Values) AddFeederFindings(all, r);
+        var power = FaultStudy.Run(model, motorMap, feeders);
+        AddPowerFindings(all, power);
         all.Sort(FindingOrder.Instance);
-        var result = new AnalysisResult(parse, motorMap, feeders, all, parseFindings, likeUsers);
+        var result = new AnalysisResult(parse, motorMap, feeders, all, parseFindings, likeUsers, power);
         result.KeepCache(run.Cache);
         return result;
     }
@@ -100,9 +103,14 @@ public static class Analyzer
         }
 
         var parseFindings = UpdateScope.SpliceLine(previous.ParseFindings, parse.Diagnostics, edit.Line, removed, added);
+        // The fault study spans the whole system (every motor feeds every fault), so it is worked out again in full: linear and cheap.
+        var motorMap = motors.ToMap();
+        var power = FaultStudy.Run(model, motorMap, feeders);
+        removed.UnionWith(previous.Power.Findings);
+        AddPowerFindings(added, power);
         added.Sort(FindingOrder.Instance);
         var kept = previous.Ranked.Where(f => !removed.Contains(f.Finding)).ToList();
-        var result = new AnalysisResult(parse, motors.ToMap(), feeders, FindingOrder.Merge(kept, added), parseFindings, likeUsers);
+        var result = new AnalysisResult(parse, motorMap, feeders, FindingOrder.Merge(kept, added), parseFindings, likeUsers, power);
         result.KeepCache(run.Cache);
         return result;
     }
@@ -113,7 +121,7 @@ public static class Analyzer
     /// </summary>
     private static AnalysisResult Reuse(AnalysisResult previous, ParseResult parse)
     {
-        var result = new AnalysisResult(parse, previous.MotorTable, previous.Feeders, previous.Ranked, previous.ParseFindings, previous.LikeUsers);
+        var result = new AnalysisResult(parse, previous.MotorTable, previous.Feeders, previous.Ranked, previous.ParseFindings, previous.LikeUsers, previous.Power);
         if (previous.TakeCache() is { } cache) result.KeepCache(cache);
         return result;
     }
@@ -136,6 +144,11 @@ public static class Analyzer
     private static void AddMotorFindings(List<RankedFinding> into, MotorResult r)
     {
         for (var i = 0; i < r.Findings.Length; i++) into.Add(new RankedFinding(r.Findings[i], RankedFinding.MotorRank(r.Motor.Header.Line.Index, i)));
+    }
+
+    private static void AddPowerFindings(List<RankedFinding> into, FaultStudy power)
+    {
+        for (var i = 0; i < power.Findings.Length; i++) into.Add(new RankedFinding(power.Findings[i], RankedFinding.PowerRank(i)));
     }
 
     private static void AddFeederFindings(List<RankedFinding> into, FeederResult r)

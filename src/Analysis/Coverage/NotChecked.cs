@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using MotorLang.Analysis.Power;
 using MotorLang.Analysis.Sizing;
 using MotorLang.Domain;
 
@@ -26,6 +27,18 @@ public enum Reach
     OverThousandVolts,
     /// <summary>Fire pump motors (<c>fire-service pump</c>) and the feeders that supply them.</summary>
     FirePump,
+    /// <summary>Circuits whose protective device's interrupting rating was not checked (no 'interrupting', or no fault current worked out there).</summary>
+    NoInterruptingCheck,
+    /// <summary>Circuits whose equipment short-circuit current rating was not checked (no 'sccr', or no fault current worked out there).</summary>
+    NoSccrCheck,
+    /// <summary>Every circuit, when the project writes no 'source'.</summary>
+    NoSource,
+    /// <summary>Single-phase and dc circuits: only the three-phase fault current is worked out.</summary>
+    NotThreePhase,
+    /// <summary>Feeders with a 'transformer'.</summary>
+    TransformerFeeder,
+    /// <summary>Feeders with a 'transformer' whose protection could not be checked.</summary>
+    TransformerNotChecked,
 }
 
 /// <summary>A rule that bears on a circuit but that MotorLang does not check: the rule, what it covers (one line), and why it is left out.</summary>
@@ -37,12 +50,15 @@ public sealed record NotCheckedRule(string Rule, string Text, string Reason, Rea
 /// </summary>
 public static class NotChecked
 {
-    private const string NoFaultCurrent = "the list carries no available fault current and no equipment ratings";
+    private const string NoFaultCurrent = "no rating written, or no available fault current worked out where it stands (no 'source', or the hover's fault-current section says why)";
 
     public static readonly ImmutableArray<NotCheckedRule> All =
     [
-        new("110.10, 409.22, 430.8", "equipment short-circuit current ratings against the available fault current", NoFaultCurrent, Reach.EveryCircuit),
-        new("110.9", "interrupting ratings of the breakers and fuses", NoFaultCurrent, Reach.EveryCircuit),
+        new("110.10, 409.22, 430.8", "equipment short-circuit current ratings against the available fault current", NoFaultCurrent, Reach.NoSccrCheck),
+        new("110.9", "interrupting ratings of the breakers and fuses", NoFaultCurrent, Reach.NoInterruptingCheck),
+        new("110.24", "the available fault current documented at the service", "no 'source' is written in the project block, so no fault current is worked out anywhere", Reach.NoSource),
+        new("110.9, 110.10", "fault current on single-phase and dc circuits (line to line, line to neutral)",
+            "only the three-phase bolted fault current is worked out; single-phase fault current is not implemented", Reach.NotThreePhase),
         new("110.3(B)", "listing and labeling instructions, such as the largest fuse or breaker a starter or drive is listed with",
             "MotorLang holds no product data; a listing may set tighter limits than the code tables", Reach.EveryCircuit),
         new("90.4", "local amendments and the rulings of the authority having jurisdiction",
@@ -83,8 +99,13 @@ public static class NotChecked
             "no 'conduit' is written, or its fill cannot be worked out (the hover shows the smallest that fits, where it can)", Reach.NoConduit),
         new("Article 430 Part XI", "motors and feeders over 1000 V: their conductors, protection and controllers",
             "MotorLang carries only the low-voltage rules and tables, so nothing on such a circuit is sized (M210)", Reach.OverThousandVolts),
-        new("430.28, 240.21", "feeder taps", "the list has no tap conductors", Reach.EveryFeeder),
-        new("450.3", "transformer overcurrent protection", "transformers are not part of the list", Reach.EveryFeeder),
+        new("430.28, 240.21(B)", "feeder taps (the 10 ft and 25 ft rules)", "not implemented: the list has no tap conductors", Reach.EveryFeeder),
+        new("450.3", "transformer overcurrent protection beyond the limits of Table 450.3(B): its Notes 2 and 3, and Table 450.3(A) over 1000 V",
+            "MotorLang checks the table's percentages and its Note 1 only", Reach.EveryFeeder),
+        new("240.21(C)(1), (C)(3), (C)(4)", "secondary conductors protected by the primary device, in industrial installations, or run outside",
+            "they depend on the transformer's connection, the kind of installation and where the conductors run, which the list does not say; the 10 ft and 25 ft rules are checked", Reach.TransformerFeeder),
+        new("450.3(B), 240.21(C)", "the transformer's protection and its secondary conductors",
+            "no 'primary-protection' is written, or a winding is over 1000 V", Reach.TransformerNotChecked),
         new("215.10, 240.13", "ground-fault protection of equipment for feeder devices of 1000 A or more",
             "the list does not say whether the feeder device has ground-fault protection", Reach.EveryFeeder),
         new("Article 220", "load calculation and demand factors for the non-motor loads",
@@ -105,9 +126,17 @@ public static class NotChecked
     ];
 
     /// <summary>What is not checked on a motor's branch circuit.</summary>
-    public static IReadOnlyList<NotCheckedRule> For(MotorResult motor) => All.Where(r => r.Reach switch
+    public static IReadOnlyList<NotCheckedRule> For(MotorResult motor, FaultStudy? power = null)
+    {
+        var fault = power?.AtController(motor.Motor);
+        var computed = fault?.Computed == true;
+        return All.Where(r => r.Reach switch
     {
         Reach.EveryCircuit or Reach.EveryMotor => true,
+        Reach.NoInterruptingCheck => !computed || motor.Motor.Interrupting is null && motor.Motor.Like is null,
+        Reach.NoSccrCheck => !computed || motor.Motor.Sccr is null && motor.Motor.Like is null,
+        Reach.NoSource => power?.Service is null,
+        Reach.NotThreePhase => motor.Phases != Phases.Three,
         Reach.Motor => !motor.IsCompressor,
         Reach.Compressor => motor.IsCompressor,
         Reach.DriveFedMotor => motor.StartingMethod == StartingMethod.Drive,
@@ -117,17 +146,29 @@ public static class NotChecked
         Reach.FirePump => motor.FireService == FireServiceRole.FirePump,
         _ => false,
     }).ToList();
+    }
 
     /// <summary>What is not checked on a feeder.</summary>
-    public static IReadOnlyList<NotCheckedRule> For(FeederResult feeder) => All.Where(r => r.Reach switch
+    public static IReadOnlyList<NotCheckedRule> For(FeederResult feeder, FaultStudy? power = null)
+    {
+        var fault = power?.Feeders.GetValueOrDefault(feeder.Feeder);
+        var f = feeder.Feeder;
+        return All.Where(r => r.Reach switch
     {
         Reach.EveryCircuit or Reach.EveryFeeder => true,
+        Reach.NoInterruptingCheck => fault?.ProtectionPoint.Computed != true || f.Interrupting is null,
+        Reach.NoSccrCheck => fault?.Bus.Computed != true || f.Sccr is null,
+        Reach.NoSource => power?.Service is null,
+        Reach.NotThreePhase => feeder.Phases != Phases.Three,
+        Reach.TransformerFeeder => f.Transformer is not null,
+        Reach.TransformerNotChecked => f.Transformer is not null && fault?.Transformer?.Method is null,
         Reach.NoLength => feeder.Drop?.HasValue != true,
         Reach.NoConduit => feeder.ConduitFillPercent is null,
         Reach.OverThousandVolts => feeder.Volts > SystemVoltages.LowVoltageLimit,
         Reach.FirePump => feeder.SuppliesFirePump,
         _ => false,
     }).ToList();
+    }
 
     /// <summary>How docs/checks.md names a reach.</summary>
     public static string Describe(Reach reach) => reach switch
@@ -141,6 +182,12 @@ public static class NotChecked
         Reach.NoConduit => "motors and feeders with no `conduit`",
         Reach.OverThousandVolts => "motors and feeders over 1000 V",
         Reach.FirePump => "fire pumps and their feeders",
+        Reach.NoInterruptingCheck => "motors and feeders with no `interrupting`, or no fault current where the device stands",
+        Reach.NoSccrCheck => "motors and feeders with no `sccr`, or no fault current where the equipment stands",
+        Reach.NoSource => "every motor and feeder when no `source` is written",
+        Reach.NotThreePhase => "single-phase and dc motors and feeders",
+        Reach.TransformerFeeder => "feeders with a `transformer`",
+        Reach.TransformerNotChecked => "feeders with a `transformer` and no `primary-protection` (or over 1000 V)",
         _ => "every feeder",
     };
 }

@@ -37,21 +37,30 @@ public static class Breakdown
         if (block is MotorNode motorNode && analysis.Motors.TryGetValue(motorNode, out var motor))
         {
             var whole = keyword is "motor" or "compressor";
-            var sections = whole ? MotorSections(motor).ToList() : MotorSections(motor).Where(s => Belongs(s.Heading, keyword)).ToList();
+            var all = MotorSections(motor);
+            if (analysis.Power.AtController(motor.Motor) is { } bus) all = all.Concat(FaultSections.ForMotor(motor.Motor, bus));
+            var sections = whole ? all.ToList() : all.Where(s => Belongs(s.Heading, keyword)).ToList();
             if (sections.Count == 0)
             {
-                sections = MotorSections(motor).ToList();
+                sections = all.ToList();
                 whole = true;
             }
 
             // A single line's hover explains that line; the whole motor's says what was and was not checked.
             var title = motor.IsCompressor ? $"{motor.Tag} — motor-compressor (Article 440)" : $"{motor.Tag} — {motor.Motor.Power?.Value} motor";
-            return new BreakdownView(title, sections, range, whole ? CircuitCoverage.For(motor) : null);
+            return new BreakdownView(title, sections, range, whole ? CircuitCoverage.For(motor, analysis.Power) : null);
         }
 
         if (block is FeederNode feederNode && position.Line <= feederNode.LastOwnLine && analysis.Feeders.TryGetValue(feederNode, out var feeder))
-            return new BreakdownView($"{feeder.Tag} — feeder, {Format.Amps(feeder.CalculatedLoad)} running load", FeederSections(feeder).ToList(), range,
-                CircuitCoverage.For(feeder));
+        {
+            var sections = FeederSections(feeder);
+            if (analysis.Power.Feeders.GetValueOrDefault(feeder.Feeder) is { } fault) sections = sections.Concat(FaultSections.ForFeeder(fault));
+            return new BreakdownView($"{feeder.Tag} — feeder, {Format.Amps(feeder.CalculatedLoad)} running load", sections.ToList(), range,
+                CircuitCoverage.For(feeder, analysis.Power));
+        }
+
+        if (keyword == "source" && analysis.Power.Service is { } service)
+            return new BreakdownView("Source — available fault current at the service", [FaultSections.ForService(service)], range);
         return null;
     }
 
@@ -80,6 +89,7 @@ public static class Breakdown
         "controller" => heading == "Controller",
         "conduit" or "raceway" => heading == "Conduit",
         "code-letter" or "design" => heading == "Locked-rotor current",
+        "sccr" or "interrupting" => heading.StartsWith(FaultSections.Heading, StringComparison.Ordinal),
         _ => true,
     };
 

@@ -13,6 +13,9 @@ internal readonly record struct RankedFinding(Finding Finding, long Rank)
     public static long MotorRank(int headerLine, int index) => (1L << 60) | ((long)headerLine << 20) | (uint)index;
 
     public static long FeederRank(int headerLine, int index) => (2L << 60) | ((long)headerLine << 20) | (uint)index;
+
+    /// <summary>The fault study's findings, in the order it wrote them (it runs whole on every analysis).</summary>
+    public static long PowerRank(int index) => (3L << 60) | (uint)index;
 }
 
 internal sealed class FindingOrder : IComparer<RankedFinding>

@@ -57,12 +57,12 @@ public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<Fee
     {
         // Findings by line, once: each row reads its own lines, so the schedule is linear in the list.
         var byLine = analysis.Findings.ToLookup(f => f.Range.Start.Line);
-        var rows = analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index).Select(m => Row(m, byLine)).ToList();
-        var feeders = analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index).Select(Totals).ToList();
+        var rows = analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index).Select(m => Row(m, byLine, analysis.Power)).ToList();
+        var feeders = analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index).Select(f => Totals(f, analysis.Power)).ToList();
         return new Schedule(rows, feeders);
     }
 
-    private static ScheduleRow Row(MotorResult m, ILookup<int, Finding> byLine)
+    private static ScheduleRow Row(MotorResult m, ILookup<int, Finding> byLine, Power.FaultStudy power)
     {
         var findings = Enumerable.Range(m.Motor.Header.Line.Index, m.Motor.LastLine - m.Motor.Header.Line.Index + 1).SelectMany(l => byLine[l]).ToList();
         var status = findings.Any(f => f.Severity == Parser.Diagnostics.Severity.Error)
@@ -81,18 +81,18 @@ public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<Fee
             status)
         {
             RulesApplied = Coverage.RulesApplied.Of(m),
-            NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(m)),
+            NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(m, power)),
         };
     }
 
-    private static FeederTotals Totals(FeederResult f) => new(
+    private static FeederTotals Totals(FeederResult f, Power.FaultStudy power) => new(
         f.Tag, f.Volts > 0 ? $"{Format.Number(f.Volts)} V" : "", Format.Amps(f.CalculatedLoad), Amps(f.RequiredAmpacity),
         Text(f.MinimumWire), f.Wire?.ToString() ?? "", f.FirePumpMinimumProtection?.Value is { } fpMin ? $"≥ {Format.Amps(fpMin)}" : Amps(f.MaximumProtection),
         f.ProtectionRating is { } p ? Format.Amps(p) : "", f.MinimumGround?.Value?.ToString() ?? "", f.Ground?.ToString() ?? "",
         f.Drop?.Value is { } d ? $"{d.Percent:0.##} %" : "")
     {
         RulesApplied = Coverage.RulesApplied.Of(f),
-        NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(f)),
+        NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(f, power)),
     };
 
     private static string Protection(MotorResult m) =>

@@ -87,8 +87,8 @@ public static class Assumptions
         page.SheetStart("not-checked", "What was not checked", block);
         page.El("p", "These rules bear on the circuits of this list but MotorLang does not check them. The engineer of record must.", "class=\"lead\"");
         page.Open("table", "class=\"plain\"").Open("thead").Open("tr").El("th", "Rule").El("th", "What").El("th", "Why not").El("th", "Circuits").Close("tr").Close("thead").Open("tbody");
-        var motors = analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index).Select(m => (m.Tag, Rules: NotChecked.For(m))).ToList();
-        var feeders = analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index).Select(f => (f.Tag, Rules: NotChecked.For(f))).ToList();
+        var motors = analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index).Select(m => (m.Tag, Rules: NotChecked.For(m, analysis.Power))).ToList();
+        var feeders = analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index).Select(f => (f.Tag, Rules: NotChecked.For(f, analysis.Power))).ToList();
         foreach (var rule in NotChecked.All)
         {
             var circuits = motors.Concat(feeders).Where(c => c.Rules.Contains(rule)).Select(c => c.Tag).ToList();

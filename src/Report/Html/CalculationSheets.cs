@@ -37,7 +37,7 @@ public static class CalculationSheets
                 ("Overload", m.Overload is { } o ? Format.Amps(o) : "not written"),
             ]);
             Sections(page, Breakdown.MotorSections(m));
-            Coverage(page, CircuitCoverage.For(m));
+            Coverage(page, CircuitCoverage.For(m, analysis.Power));
             Findings(page, byLine, lines, m.Motor.Header.Line.Index, m.Motor.LastLine);
             page.SheetEnd();
         }
@@ -56,7 +56,7 @@ public static class CalculationSheets
                 ("Protection", Labels.Protection(f.ProtectionRating, f.Feeder.Protection?.Value, null, null)),
             ]);
             Sections(page, Breakdown.FeederSections(f));
-            Coverage(page, CircuitCoverage.For(f));
+            Coverage(page, CircuitCoverage.For(f, analysis.Power));
             Findings(page, byLine, lines, f.Feeder.Header.Line.Index, f.Feeder.LastOwnLine);
             page.SheetEnd();
         }

@@ -28,12 +28,13 @@ public static class CodeTables
     public static CsvTable Impedance { get; } = BySize("impedance");
     public static CsvTable DcResistance { get; } = BySize("dc-resistance");
     public static CsvTable NemaStarters { get; } = Ascending("nema-starters", "amperes");
+    public static CsvTable TransformerProtection { get; } = CsvTable.Load("transformer-protection");
 
     public static IEnumerable<CsvTable> All =>
     [
         ThreePhaseFlc, SynchronousFlc, SinglePhaseFlc, DcFlc, SinglePhaseLockedRotor, PolyphaseLockedRotor, CodeLetters,
         Ampacity, AmbientCorrection, CccAdjustment, ProtectionPercent, StandardRatings, GroundingConductors, DutyCycle,
-        ConduitArea, ConductorArea, Impedance, DcResistance, NemaStarters,
+        ConduitArea, ConductorArea, Impedance, DcResistance, NemaStarters, TransformerProtection,
     ];
 
     private static CsvTable Ascending(string name, string key)

@@ -32,13 +32,13 @@ public static class ScheduleDataBuilder
 
         var model = analysis.Parse.Model;
         var motors = analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index)
-            .Select(m => Motor(m, model, locate(m.Motor.Header.Line.Index), FindingsOn(byLine, m.Motor.Header.Line.Index, m.Motor.LastLine, locate))).ToList();
+            .Select(m => Motor(m, model, locate(m.Motor.Header.Line.Index), FindingsOn(byLine, m.Motor.Header.Line.Index, m.Motor.LastLine, locate), analysis.Power)).ToList();
         var feeders = analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index)
-            .Select(f => Feeder(f, locate(f.Feeder.Header.Line.Index), FindingsOn(byLine, f.Feeder.Header.Line.Index, f.Feeder.LastOwnLine, locate))).ToList();
+            .Select(f => Feeder(f, locate(f.Feeder.Header.Line.Index), FindingsOn(byLine, f.Feeder.Header.Line.Index, f.Feeder.LastOwnLine, locate), analysis.Power)).ToList();
         return new ScheduleData(ScheduleData.CurrentFormatVersion, TitleBlocks.Of(model), motors, feeders);
     }
 
-    private static MotorData Motor(MotorResult m, MotorList model, (string? File, int Line) at, IReadOnlyList<RowFinding> findings)
+    private static MotorData Motor(MotorResult m, MotorList model, (string? File, int Line) at, IReadOnlyList<RowFinding> findings, Power.FaultStudy power)
     {
         var node = m.Motor;
         T? Own<T>(Func<MotorNode, Located<T>?> get) where T : struct => Likes.Get(node, model, get) is { } v ? v.Value.Value : null;
@@ -97,12 +97,12 @@ public static class ScheduleDataBuilder
             Findings = findings,
             NotComputed = missing,
             RulesApplied = Coverage.RulesApplied.Of(m),
-            NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(m)),
+            NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(m, power)),
         };
         return row;
     }
 
-    private static FeederData Feeder(FeederResult f, (string? File, int Line) at, IReadOnlyList<RowFinding> findings)
+    private static FeederData Feeder(FeederResult f, (string? File, int Line) at, IReadOnlyList<RowFinding> findings, Power.FaultStudy power)
     {
         var node = f.Feeder;
         var missing = new List<NotComputed>();
@@ -140,7 +140,7 @@ public static class ScheduleDataBuilder
             Findings = findings,
             NotComputed = missing,
             RulesApplied = Coverage.RulesApplied.Of(f),
-            NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(f)),
+            NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(f, power)),
         };
     }
 

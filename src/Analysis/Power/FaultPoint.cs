@@ -1,0 +1,77 @@
+using System.Collections.Immutable;
+using MotorLang.Sizing;
+using MotorLang.Sizing.Rules.Faults;
+
+namespace MotorLang.Analysis.Power;
+
+/// <summary>
+/// The available three-phase fault current at one point of the system: the impedance from the
+/// source to it, the bolted fault current, and the same with the running motors' contribution.
+/// Steps are written only when read (a hover), by walking back to the source, so a chain of n
+/// feeders costs n to compute and nothing to explain until someone asks.
+/// </summary>
+public sealed class FaultPoint
+{
+    private readonly FaultPoint? _upstream;
+    private readonly ImmutableArray<Step> _own;
+
+    internal FaultPoint(string name, decimal volts, Impedance impedance, FaultPoint? upstream, ImmutableArray<Step> own, decimal runningMotorAmps)
+    {
+        Name = name;
+        Volts = volts;
+        Impedance = impedance;
+        _upstream = upstream;
+        _own = own;
+        Known = true;
+        var bolted = FaultCurrent.Bolted(name, volts, impedance);
+        if (bolted.Value is not { } amps)
+        {
+            Bolted = new Result<decimal>(null, [.. Path(), .. bolted.Steps], bolted.Unavailable);
+            WithMotors = Bolted;
+            return;
+        }
+
+        Bolted = Result<decimal>.Deferred(amps, () => [.. Path(), .. bolted.Steps]);
+        MotorAmps = FaultCurrent.MotorContributionMultiple * runningMotorAmps;
+        var with = FaultCurrent.MotorContribution(runningMotorAmps, amps);
+        WithMotors = Result<decimal>.Deferred(with.Value!.Value, () => [.. Bolted.Steps, .. with.Steps]);
+    }
+
+    /// <summary>A point where the fault current could not be worked out, with the reason.</summary>
+    internal FaultPoint(string name, string unavailable)
+    {
+        Name = name;
+        Bolted = Result<decimal>.Missing(unavailable);
+        WithMotors = Bolted;
+        _own = [];
+    }
+
+    public string Name { get; }
+    public decimal Volts { get; }
+    public Impedance Impedance { get; }
+
+    /// <summary>The bolted three-phase fault current from the source alone.</summary>
+    public Result<decimal> Bolted { get; }
+
+    /// <summary>The bolted fault current plus ≈ 4 × FLC of the running motors (an approximation); the ratings are checked against this.</summary>
+    public Result<decimal> WithMotors { get; }
+
+    /// <summary>The motors' share (≈ 4 × FLC), null where nothing was computed.</summary>
+    public decimal? MotorAmps { get; }
+
+    public decimal? XOverR => Bolted.HasValue ? Impedance.XOverR : null;
+
+    public bool Computed => Bolted.HasValue;
+
+    /// <summary>The impedance from the source is known (it may still be zero: an infinite bus gives no current to check against).</summary>
+    public bool Known { get; }
+
+    /// <summary>Every element's step from the source to here, in order.</summary>
+    private IEnumerable<Step> Path()
+    {
+        var chain = new List<FaultPoint>();
+        for (var p = this; p is not null; p = p._upstream) chain.Add(p);
+        chain.Reverse();
+        return chain.SelectMany(p => p._own);
+    }
+}
