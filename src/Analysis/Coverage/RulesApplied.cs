@@ -62,13 +62,13 @@ public static class RulesApplied
     /// <summary>
     /// The code references in a step's rule: "NEC 430.6(A)(1), Table 430.250" is two. A piece that does
     /// not start a reference ("note 2" in "Chapter 9 Table 9, note 2") stays with the one before it.
-    /// A rule of thumb ("common practice, no source"), a value from memory or a reference marked as not
+    /// A rule of thumb ("common practice, no source"), a reading of our own ("conservative reading"), a value from memory or a reference marked as not
     /// checked (the NEMA starter suggestion) is not a rule applied, and is left out (the steps still show it).
     /// </summary>
     public static IEnumerable<string> References(string rule)
     {
         if (rule.StartsWith("common practice", StringComparison.OrdinalIgnoreCase) || rule.StartsWith("from memory", StringComparison.OrdinalIgnoreCase)
-            || rule.Contains("not checked", StringComparison.OrdinalIgnoreCase))
+            || rule.Contains("not checked", StringComparison.OrdinalIgnoreCase) || rule.StartsWith("conservative reading", StringComparison.OrdinalIgnoreCase))
             yield break;
         string? pending = null;
         foreach (var raw in SplitTopLevel(rule))

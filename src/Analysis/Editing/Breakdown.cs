@@ -38,7 +38,8 @@ public static class Breakdown
         {
             var whole = keyword is "motor" or "compressor";
             var all = MotorSections(motor);
-            if (analysis.Power.AtController(motor.Motor) is { } bus) all = all.Concat(FaultSections.ForMotor(motor.Motor, bus));
+            // With no 'source' at all there is nothing to show but the reason, which the "Not checked" list gives (110.24).
+            if (analysis.Power.HasSource && analysis.Power.AtController(motor.Motor) is { } bus) all = all.Concat(FaultSections.ForMotor(motor.Motor, bus));
             var sections = whole ? all.ToList() : all.Where(s => Belongs(s.Heading, keyword)).ToList();
             if (sections.Count == 0)
             {
@@ -54,7 +55,7 @@ public static class Breakdown
         if (block is FeederNode feederNode && position.Line <= feederNode.LastOwnLine && analysis.Feeders.TryGetValue(feederNode, out var feeder))
         {
             var sections = FeederSections(feeder);
-            if (analysis.Power.Feeders.GetValueOrDefault(feeder.Feeder) is { } fault) sections = sections.Concat(FaultSections.ForFeeder(fault));
+            if (analysis.Power.HasSource && analysis.Power.Feeders.GetValueOrDefault(feeder.Feeder) is { } fault) sections = sections.Concat(FaultSections.ForFeeder(fault));
             return new BreakdownView($"{feeder.Tag} — feeder, {Format.Amps(feeder.CalculatedLoad)} running load", sections.ToList(), range,
                 CircuitCoverage.For(feeder, analysis.Power));
         }

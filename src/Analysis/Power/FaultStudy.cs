@@ -28,14 +28,18 @@ public sealed record FeederFault(FeederNode Feeder, FaultPoint Supply, FaultPoin
 /// </summary>
 public sealed class FaultStudy
 {
-    private FaultStudy(FaultPoint? service, Dictionary<FeederNode, FeederFault> feeders, ImmutableArray<Finding> findings)
+    private FaultStudy(FaultPoint? service, Dictionary<FeederNode, FeederFault> feeders, ImmutableArray<Finding> findings, bool hasSource)
     {
+        HasSource = hasSource;
         Service = service;
         Feeders = feeders;
         Findings = findings;
     }
 
-    public static readonly FaultStudy Empty = new(null, [], []);
+    public static readonly FaultStudy Empty = new(null, [], [], false);
+
+    /// <summary>The project writes a 'source' (its values may still be incomplete).</summary>
+    public bool HasSource { get; }
 
     /// <summary>At the service (the point the 'source' is stated at); null when the project writes no 'source'.</summary>
     public FaultPoint? Service { get; }
@@ -50,7 +54,7 @@ public sealed class FaultStudy
     public static FaultStudy Run(MotorList model, IReadOnlyDictionary<MotorNode, MotorResult> motors, IReadOnlyDictionary<FeederNode, FeederResult> feeders)
     {
         var builder = new StudyBuilder(model, motors, feeders);
-        return new FaultStudy(builder.Service, builder.Results, [.. builder.Findings]);
+        return new FaultStudy(builder.Service, builder.Results, [.. builder.Findings], model.Project?.Source is not null);
     }
 
     private sealed class StudyBuilder
@@ -163,6 +167,8 @@ public sealed class FaultStudy
             string? why = null;
             if (!supply.Known) why = $"not worked out where it is supplied: {supply.Bolted.Unavailable}";
             else if (f.Phases?.Value != Phases.Three) why = "only the three-phase fault current is worked out; single-phase (line to line, line to neutral) and dc are not implemented";
+            else if (f.Transformer is not null && (f.TransformerRating is null || f.TransformerPrimary is null || f.TransformerSecondary is null))
+                why = "the transformer line lacks its kVA or its voltages";
             else if (f.Transformer is not null && f.TransformerImpedance is null) why = "the transformer has no %Z written";
             else if (f.Transformer is not null && f.TransformerXOverR is null) why = "the transformer has no X/R written";
             else if (f.Transformer is not null && (f.TransformerPrimary!.Value.Value != supply.Volts || f.TransformerSecondary!.Value.Value != volts))
