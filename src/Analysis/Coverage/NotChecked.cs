@@ -31,7 +31,7 @@ public enum Reach
     NoInterruptingCheck,
     /// <summary>Circuits whose equipment short-circuit current rating was not checked (no 'sccr', or no fault current worked out there).</summary>
     NoSccrCheck,
-    /// <summary>Every circuit, when the project writes no 'source'.</summary>
+    /// <summary>Feeders supplied at the service (no 'from'), when the project writes no 'source'.</summary>
     NoSource,
     /// <summary>Single-phase and dc circuits: only the three-phase fault current is worked out.</summary>
     NotThreePhase,
@@ -135,7 +135,7 @@ public static class NotChecked
         Reach.EveryCircuit or Reach.EveryMotor => true,
         Reach.NoInterruptingCheck => !computed || motor.Motor.Interrupting is null && motor.Motor.Like is null,
         Reach.NoSccrCheck => !computed || motor.Motor.Sccr is null && motor.Motor.Like is null,
-        Reach.NoSource => power is not { HasSource: true },
+        Reach.NoSource => false,
         Reach.NotThreePhase => motor.Phases != Phases.Three,
         Reach.Motor => !motor.IsCompressor,
         Reach.Compressor => motor.IsCompressor,
@@ -158,7 +158,7 @@ public static class NotChecked
         Reach.EveryCircuit or Reach.EveryFeeder => true,
         Reach.NoInterruptingCheck => fault?.ProtectionPoint.Computed != true || f.Interrupting is null,
         Reach.NoSccrCheck => fault?.Bus.Computed != true || f.Sccr is null,
-        Reach.NoSource => power is not { HasSource: true },
+        Reach.NoSource => f.From is null && power is not { HasSource: true },
         Reach.NotThreePhase => feeder.Phases != Phases.Three,
         Reach.TransformerFeeder => f.Transformer is not null,
         Reach.TransformerNotChecked => f.Transformer is not null && fault?.Transformer?.Method is null,
@@ -184,7 +184,7 @@ public static class NotChecked
         Reach.FirePump => "fire pumps and their feeders",
         Reach.NoInterruptingCheck => "motors and feeders with no `interrupting`, or no fault current where the device stands",
         Reach.NoSccrCheck => "motors and feeders with no `sccr`, or no fault current where the equipment stands",
-        Reach.NoSource => "every motor and feeder when no `source` is written",
+        Reach.NoSource => "feeders supplied at the service (no `from`) when no `source` is written",
         Reach.NotThreePhase => "single-phase and dc motors and feeders",
         Reach.TransformerFeeder => "feeders with a `transformer`",
         Reach.TransformerNotChecked => "feeders with a `transformer` and no `primary-protection` (or over 1000 V)",
