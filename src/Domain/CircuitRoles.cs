@@ -8,3 +8,9 @@ public enum FireServiceRole { FirePump, PressureMaintenance, Accessory }
 /// winding connection, or one for both windings.
 /// </summary>
 public enum WindingScope { PerWinding, BothWindings }
+
+/// <summary>Where a power-factor capacitor on a motor circuit is connected relative to the motor's overload device (460.9).</summary>
+public enum CapacitorPosition { LoadSide, LineSide }
+
+/// <summary>Where the overload relay of a wye-start, delta-run motor sits: in the motor leads (the delta circuit) or in the line conductors.</summary>
+public enum OverloadLocation { DeltaLeads, LineLeads }

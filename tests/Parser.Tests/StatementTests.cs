@@ -120,6 +120,25 @@ public class StatementTests
         Assert.Equal([expected], Codes(Lines(Feeder, "  motor P-1 15hp", line)));
 
     [Fact]
+    public void CapacitorAndWyeDeltaWordsAreRead()
+    {
+        var m = Motor("capacitor 7.5kVAR 480V line-side", "capacitor-wire 12 AWG", "improved-current 26.5A", "overload 33A line-leads");
+        Assert.Equal(new Quantity(7.5m, Unit.Kvar), m.CapacitorKvar!.Value);
+        Assert.Equal(480m, m.CapacitorVoltage!.Value.Value);
+        Assert.Equal(CapacitorPosition.LineSide, m.CapacitorPosition!.Value);
+        Assert.Equal("12 AWG", m.CapacitorWire!.Value.ToString());
+        Assert.Equal(26.5m, m.ImprovedCurrent!.Value.Value);
+        Assert.Equal(OverloadLocation.LineLeads, m.OverloadLocation!.Value);
+        Assert.Equal(20m, Motor("capacitor 20A").CapacitorCurrent!.Value.Value);
+    }
+
+    [Theory]
+    [InlineData("    capacitor 480V load-side", "3:5-3:14 P045")]
+    [InlineData("    capacitor 10kVA", "3:15-3:20 P003")]
+    public void ACapacitorNeedsItsKvarOrCurrent(string line, string expected) =>
+        Assert.Equal([expected], Codes(Lines(Feeder, "  motor P-1 15hp", line)));
+
+    [Fact]
     public void LoadsTakeCurrentOrKvaAndContinuity()
     {
         var f = DocumentParser.Parse(Lines(Feeder, "  load L-1 \"Lights\" 12A continuous", "  load L-2 6kVA")).Model.Feeders.Single();

@@ -39,6 +39,8 @@ public enum Reach
     TransformerFeeder,
     /// <summary>Feeders with a 'transformer' whose protection could not be checked.</summary>
     TransformerNotChecked,
+    /// <summary>Motors with a power-factor capacitor written (<c>capacitor</c>, Article 460).</summary>
+    Capacitor,
 }
 
 /// <summary>A rule that bears on a circuit but that MotorLang does not check: the rule, what it covers (one line), and why it is left out.</summary>
@@ -123,6 +125,12 @@ public static class NotChecked
         new("695.10", "listing of the fire pump controller and transfer switch for fire pump service",
             "MotorLang holds no product data", Reach.FirePump),
         new("695.14", "fire pump control wiring", "control wiring is not part of the list", Reach.FirePump),
+        new("460.8(B)", "the capacitor's overcurrent device (none is required for a capacitor on the load side of the motor overload, 460.8(B) Exception)",
+            "the list records no device for the capacitor; its rating depends on the capacitor's own data", Reach.Capacitor),
+        new("460.8(C)", "the capacitor's disconnecting means (at least 135 % of its rated current; none is required on the load side of the motor controller, 460.8(C) Exception)",
+            "the list records no disconnect for the capacitor", Reach.Capacitor),
+        new("460.7", "that the kvar on the load side of the controller does not exceed what raises the motor's no-load power factor to unity (lettering from memory)",
+            "it needs the motor's no-load current, which the list does not carry", Reach.Capacitor),
     ];
 
     /// <summary>What is not checked on a motor's branch circuit.</summary>
@@ -144,6 +152,7 @@ public static class NotChecked
         Reach.NoConduit => motor.ConduitFillPercent is null,
         Reach.OverThousandVolts => Math.Max(motor.RatedVolts, motor.Volts) > SystemVoltages.LowVoltageLimit,
         Reach.FirePump => motor.FireService == FireServiceRole.FirePump,
+        Reach.Capacitor => motor.HasCapacitor,
         _ => false,
     }).ToList();
     }
@@ -188,6 +197,7 @@ public static class NotChecked
         Reach.NotThreePhase => "single-phase and dc motors and feeders",
         Reach.TransformerFeeder => "feeders with a `transformer`",
         Reach.TransformerNotChecked => "feeders with a `transformer` and no `primary-protection` (or over 1000 V)",
+        Reach.Capacitor => "motors with a `capacitor`",
         _ => "every feeder",
     };
 }

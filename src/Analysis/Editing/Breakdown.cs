@@ -83,6 +83,9 @@ public static class Breakdown
         "min-ampacity" => heading == "Branch conductors",
         "locked-rotor" => heading is "Short-circuit and ground-fault protection" or "Locked-rotor current" or "Disconnecting means" or FirePumpVoltageHeading,
         "drive-overload" => heading == "Overload",
+        "capacitor" => heading is "Capacitor conductors" or "Overload",
+        "capacitor-wire" => heading == "Capacitor conductors",
+        "improved-current" => heading == "Overload",
         "overload" or "nameplate" or "service-factor" or "temp-rise" => heading is "Full-load current" or "Overload",
         "ground" => heading == "Grounding conductor",
         "length" or "drop-limit" or "power-factor" => heading is "Voltage drop" or FirePumpVoltageHeading,
@@ -119,6 +122,12 @@ public static class Breakdown
         if (m.OverloadLimit is { } ol)
             yield return new BreakdownSection("Overload", ol.Steps.Concat(m.OverloadAbsoluteLimit?.Steps.Skip(1) ?? []).Concat(m.NoOverloadRequired?.Steps ?? []).ToList(),
                 ol.Unavailable ?? Compare(m.Overload, ol.Value, "setting", atMost: true));
+        if (m.CapacitorRatedCurrent is { } cap)
+            yield return new BreakdownSection("Capacitor conductors",
+                cap.Steps.Concat(m.CapacitorRequiredAmpacity?.Steps ?? []).Concat(m.MinimumCapacitorWire?.Steps ?? []).ToList(),
+                cap.Unavailable ?? (m.CapacitorWire is { } cw && m.CapacitorWireAmpacity?.Value is { } ca && m.CapacitorRequiredAmpacity?.Value is { } cr
+                    ? (ca >= cr ? $"✓ {cw} carries {Format.Amps(ca)} ≥ {Format.Amps(cr)}" : $"✗ {cw} carries only {Format.Amps(ca)}; {Format.Amps(cr)} is required")
+                    : null));
         if (m.MinimumGround is { } g)
             yield return new BreakdownSection("Grounding conductor", g.Steps,
                 m.Ground is { } written && g.Value is { } min ? (written >= min ? $"✓ {written} ≥ {min}" : $"✗ {written} is smaller than {min}") : null);

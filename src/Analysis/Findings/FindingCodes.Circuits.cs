@@ -10,3 +10,10 @@ public static partial class FindingCodes
     public const string SemiconductorFuseNotChecked = "M151";
     public const string ClassCcNotAFuse = "M152";
 }
+
+/// <summary>Codes for capacitors, reduced-voltage starting leads and drives (M134-M149), errors and warnings as docs/checks.md says.</summary>
+public static partial class FindingCodes
+{
+    public const string CapacitorWireUndersized = "M134";
+    public const string CapacitorOverloadBasis = "M135";
+}

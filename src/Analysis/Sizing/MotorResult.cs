@@ -108,6 +108,24 @@ public sealed class MotorResult(MotorNode motor)
     /// </summary>
     public decimal? EquipmentOtherLoads { get; internal set; }
 
+    /// <summary>A power-factor capacitor is written on this motor circuit (Article 460).</summary>
+    public bool HasCapacitor { get; internal set; }
+
+    /// <summary>The capacitor is on the load side of the overload (written or taken so): 460.9 sets the overload's basis.</summary>
+    public bool CapacitorOnLoadSide { get; internal set; }
+
+    /// <summary>The capacitor's rated current, written or from its kvar (460.8(A)).</summary>
+    public Result<decimal>? CapacitorRatedCurrent { get; internal set; }
+
+    /// <summary>The ampacity the capacitor's conductors need (460.8(A)).</summary>
+    public Result<decimal>? CapacitorRequiredAmpacity { get; internal set; }
+    public Result<WireSpec>? MinimumCapacitorWire { get; internal set; }
+    public WireSpec? CapacitorWire { get; internal set; }
+    public Result<decimal>? CapacitorWireAmpacity { get; internal set; }
+
+    /// <summary>The current the overload is selected from when it is not the nameplate (460.9, with a load-side capacitor).</summary>
+    public Result<decimal>? OverloadBasis { get; internal set; }
+
     /// <summary>The current this motor adds to its feeder under 430.24 (its duty-cycle current when it has one).</summary>
     public decimal? DutyCycleAmps { get; internal set; }
 }

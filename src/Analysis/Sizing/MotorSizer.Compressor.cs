@@ -35,6 +35,12 @@ internal sealed partial class MotorSizer
         ["fire-service"] = "a motor-compressor is not part of a fire pump installation",
         ["overload"] = "motor-compressor overload protection (440 Part VI, 440.52) is not checked by MotorLang",
         ["controller"] = "a motor-compressor's controller rating (440.41) is not checked by MotorLang",
+        ["capacitor"] = "power-factor capacitors on a motor-compressor circuit are not modelled (Article 460 is checked on motors only)",
+        ["capacitor-wire"] = "power-factor capacitors on a motor-compressor circuit are not modelled",
+        ["improved-current"] = "a motor-compressor's overload (440 Part VI) is not checked by MotorLang",
+        ["motor-leads"] = "the starting method of a motor-compressor is not modelled",
+        ["drive-bypass"] = "drives on a motor-compressor are not modelled",
+        ["drive-max-protection"] = "drives on a motor-compressor are not modelled",
     };
 
     private static readonly string[] CompressorOnly = ["rated-load", "selection-current", "min-ampacity", "max-protection"];

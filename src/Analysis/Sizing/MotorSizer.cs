@@ -114,6 +114,7 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
             CheckFirePumpOverload(motor, r);
         else
             CheckOverload(motor, r, starting);
+        CheckCapacitor(motor, r, settings);
         CheckDisconnectAndController(motor, r, flc, power.Value, starting, driveInput);
         CheckGround(motor, r, protectionFlc, phases, kind, design, efficiency, settings);
         LockedRotor(motor, r, phases, design);
@@ -317,6 +318,26 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         decimal? rise = riseQuantity is { } q ? (q.Unit == Unit.Fahrenheit ? q.Value * 5m / 9m : q.Value) : null;
         r.OverloadLimit = cache.Overload(nameplate, sf, rise, absolute: false);
         r.OverloadAbsoluteLimit = cache.Overload(nameplate, sf, rise, absolute: true);
+        // 460.9: with a capacitor on its load side, the overload is selected from the improved-power-factor current.
+        if (CapacitorOverloadBasis(motor, r, nameplate) is { } basis)
+        {
+            r.OverloadBasis = basis;
+            r.OverloadLimit = Overloads.FromBasis(basis, sf, rise, absolute: false);
+            r.OverloadAbsoluteLimit = Overloads.FromBasis(basis, sf, rise, absolute: true);
+        }
+
+        // A wye-delta motor's overload in the motor leads carries 1/√3 of the line current (430.22(C) note).
+        var location = Get(motor, m => m.OverloadLocation);
+        var inDeltaLeads = starting == StartingMethod.WyeDelta && location?.Value != OverloadLocation.LineLeads;
+        if (inDeltaLeads)
+        {
+            r.OverloadLimit = WyeDelta.OverloadInDeltaLeads(r.OverloadLimit, location is not null, "Overload limit in the delta leads");
+            r.OverloadAbsoluteLimit = WyeDelta.OverloadInDeltaLeads(r.OverloadAbsoluteLimit, location is not null, "Overload maximum in the delta leads");
+        }
+        else if (location is not null && starting != StartingMethod.WyeDelta)
+            Add(FindingCodes.NotUsedHere, Severity.Warning, location.Range,
+                "an overload location (delta-leads, line-leads) means something only for a wye-delta motor ('starting wye-delta'); it is not used here");
+        var where = inDeltaLeads ? " (in the delta leads, 1/√3 of the line current)" : r.OverloadBasis is not null ? " (from the 460.9 improved-power-factor current)" : "";
         // 430.4: separate overloads on each half of a part-winding motor trip at one half (the stricter reading when not said).
         var windings = starting == StartingMethod.PartWinding ? Get(motor, m => m.OverloadWindings)?.Value ?? WindingScope.PerWinding : (WindingScope?)null;
         if (windings is { } scope)
@@ -334,11 +355,21 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
             if (DriveProvidesOverload(motor, r, starting)) return;
             if (r.OverloadLimit.Value is { } limit)
                 Add(FindingCodes.OverloadMissing, Severity.Warning, motor.Header.KeywordToken.Range,
-                    $"no overload given; NEC {(windings is null ? "430.32(A)(1)" : "430.32(A)(1) and 430.4")} requires one, rated at most {Format.Amps(limit)}",
-                    Insert(motor, $"overload {Format.Number(RoundDown(limit))}A{(windings is null ? "" : windings == WindingScope.PerWinding ? " per-winding" : "")}", "Add the overload at its 430.32(A)(1) limit"));
+                    $"no overload given; NEC {(windings is null ? "430.32(A)(1)" : "430.32(A)(1) and 430.4")} requires one, rated at most {Format.Amps(limit)}{where}",
+                    Insert(motor, $"overload {Format.Number(RoundDown(limit))}A{(windings is null ? "" : windings == WindingScope.PerWinding ? " per-winding" : "")}{(inDeltaLeads ? " delta-leads" : "")}", "Add the overload at its 430.32(A)(1) limit"));
+            else if (r.OverloadBasis is { Unavailable: { } needsImproved })
+                Add(FindingCodes.CapacitorOverloadBasis, Severity.Warning, motor.Header.KeywordToken.Range,
+                    $"no overload given, and none can be proposed: {needsImproved}");
             else
                 Add(FindingCodes.CannotCheck, Severity.Warning, motor.Header.KeywordToken.Range,
                     "no overload and no nameplate current: NEC 430.32 overloads are sized from the nameplate");
+            return;
+        }
+
+        if (r.OverloadBasis is { Unavailable: { } noBasis })
+        {
+            Add(FindingCodes.CapacitorOverloadBasis, Severity.Warning, RangeOn(motor, owner, overload.Range),
+                $"overload {Format.Amps(overload.Value.Value)} cannot be checked: {noBasis}");
             return;
         }
 
@@ -352,11 +383,11 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         var value = overload.Value.Value;
         if (value > absolute)
             Add(FindingCodes.OverloadTooLarge, Severity.Error, RangeOn(motor, owner, overload.Range),
-                $"overload {Format.Amps(value)} is above even the NEC 430.32(C) maximum of {Format.Amps(absolute)}; NEC 430.32(A)(1) allows {Format.Amps(max)}",
+                $"overload {Format.Amps(value)} is above even the NEC 430.32(C) maximum of {Format.Amps(absolute)}{where}; NEC 430.32(A)(1) allows {Format.Amps(max)}",
                 ReplaceOrOverride(motor, owner, "overload", "setting", $"{Format.Number(RoundDown(max))}A", $"Change the overload to {Format.Amps(RoundDown(max))}"));
         else if (value > max)
             Add(FindingCodes.OverloadAboveRunningLimit, Severity.Warning, RangeOn(motor, owner, overload.Range),
-                $"overload {Format.Amps(value)} is above the NEC 430.32(A)(1) limit of {Format.Amps(max)}; that is allowed only where the smaller device will not start the motor (430.32(C), up to {Format.Amps(absolute)})");
+                $"overload {Format.Amps(value)} is above the NEC 430.32(A)(1) limit of {Format.Amps(max)}{where}; that is allowed only where the smaller device will not start the motor (430.32(C), up to {Format.Amps(absolute)})");
     }
 
     private void CheckDisconnectAndController(MotorNode motor, MotorResult r, decimal flc, Quantity power, StartingMethod starting, decimal? driveInput)

@@ -29,4 +29,5 @@ public static class SyntaxCodes
     public const string MoreOnLine = "P027";
     /// <summary>A 'source' missing a value its kind needs, or given one its kind does not take.</summary>
     public const string SourceValues = "P035";
+    public const string CapacitorRating = "P045";
 }

@@ -235,6 +235,20 @@ public sealed class MotorNode(Statement header, FeederNode feeder) : CircuitNode
     public Located<Quantity>? MinimumAmpacity => Get<Quantity>("min-ampacity", "current");
     /// <summary>The equipment's marked maximum branch short-circuit and ground-fault device rating (440.4(B)).</summary>
     public Located<Quantity>? MarkedMaximumProtection => Get<Quantity>("max-protection", "current");
+    /// <summary>A power-factor capacitor on the motor circuit (Article 460): its kvar, rated current, voltage and position.</summary>
+    public Located<Quantity>? CapacitorKvar => Get<Quantity>("capacitor", "reactive-power");
+    public Located<Quantity>? CapacitorCurrent => Get<Quantity>("capacitor", "current");
+    public Located<Quantity>? CapacitorVoltage => Get<Quantity>("capacitor", "voltage");
+    public Located<CapacitorPosition>? CapacitorPosition => Get<CapacitorPosition>("capacitor", "position");
+    public Located<WireSpec>? CapacitorWire => Get<WireSpec>("capacitor-wire", "size");
+    /// <summary>The motor circuit's current with the capacitor connected (460.9).</summary>
+    public Located<Quantity>? ImprovedCurrent => Get<Quantity>("improved-current", "current");
+    /// <summary>Conductors between the controller or drive and the motor (430.22(C), (D), 430.122(B)).</summary>
+    public Located<WireSpec>? MotorLeads => Get<WireSpec>("motor-leads", "size");
+    public Located<OverloadLocation>? OverloadLocation => Get<OverloadLocation>("overload", "location");
+    public bool DriveBypass => Has("drive-bypass");
+    /// <summary>The drive's marked or instructed maximum branch device rating (430.130(A)(2)).</summary>
+    public Located<Quantity>? DriveMaximumProtection => Get<Quantity>("drive-max-protection", "current");
     public Located<bool>? DriveOverload => Has("drive-overload") ? new Located<bool>(true, Statement("drive-overload")!.Range) : null;
 }
 

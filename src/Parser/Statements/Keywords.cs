@@ -132,6 +132,18 @@ public static class Keywords
         new("both-windings", WindingScope.BothWindings, "one device for both windings of a part-winding motor (430.4 Exception)"),
     ];
 
+    public static readonly WordChoice[] CapacitorPositions =
+    [
+        new("load-side", CapacitorPosition.LoadSide, "connected on the load side of the motor's overload device: the overload is set from the improved-power-factor current (460.9); the default"),
+        new("line-side", CapacitorPosition.LineSide, "connected on the line side of the motor's overload device: the overload is set from the nameplate as usual"),
+    ];
+
+    public static readonly WordChoice[] OverloadLocations =
+    [
+        new("delta-leads", OverloadLocation.DeltaLeads, "a wye-delta motor's overload sits in the motor leads (the delta circuit), which carry 1/√3 of the line current; the default"),
+        new("line-leads", OverloadLocation.LineLeads, "a wye-delta motor's overload sits in the line conductors ahead of the wye-delta contactors"),
+    ];
+
     public static readonly WordChoice[] LoadDuties =
     [
         new("continuous", true, "runs three hours or more at a time: counted at 125 %"),
@@ -234,8 +246,9 @@ public static class Keywords
             "Duty and, for non-continuous duty, the motor's time rating (5, 15, 30 or 60 min; none = continuous rated)."),
         new("starting", [Motor], null, [new("method", Word, true, StartingMethods), new("input-current", Current, false, Check: Positive)],
             "Starting method; for a drive, its rated input current."),
-        new("overload", [Motor], null, [new("setting", Current, true, Check: Positive), new("windings", Word, false, WindingScopes)],
-            "Overload relay setting or heater rating; for a part-winding motor, per-winding or both-windings."),
+        new("overload", [Motor], null,
+            [new("setting", Current, true, Check: Positive), new("windings", Word, false, WindingScopes), new("location", Word, false, OverloadLocations)],
+            "Overload relay setting or heater rating; for a part-winding motor, per-winding or both-windings; for a wye-delta motor, delta-leads or line-leads."),
         new("disconnect", [Motor], null,
             [new("rating", Current, false, Check: Positive), new("power", Power, false, Check: Positive)],
             "Disconnecting means: ampere rating and horsepower rating."),
@@ -257,6 +270,14 @@ public static class Keywords
             "The equipment's marked maximum branch short-circuit and ground-fault device rating (440.4(B)): never exceeded."),
         new("drive-overload", [Motor], null, [],
             "The drive is marked as providing the motor's overload protection (430.124(A)): no separate overload needed."),
+        new("capacitor", [Motor], null,
+            [new("reactive-power", ReactivePower, false, Check: Positive), new("current", Current, false, Check: Positive),
+             new("voltage", Voltage, false, Check: Positive), new("position", Word, false, CapacitorPositions)],
+            "A power-factor capacitor on the motor circuit (Article 460): its kvar or rated current, its rated voltage, load-side or line-side of the overload."),
+        new("capacitor-wire", [Motor], null, [new("size", Wire, true)],
+            "The conductors that connect the capacitor to the motor terminals or the motor circuit conductors (460.8(A))."),
+        new("improved-current", [Motor], null, [new("current", Current, true, Check: Positive)],
+            "The motor circuit's current at the improved power factor, with the capacitor connected: the overload is selected from it (460.9)."),
         new("hard-start", [Motor], null, [],
             "The motor will not start on the Table 430.52(C)(1) rating: allow the 430.52(C)(1)(b) maximums."),
     ];

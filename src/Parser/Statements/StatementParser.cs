@@ -101,6 +101,11 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         }
 
         if (spec.Keyword == "source") CheckSource(line, spec, filled);
+        // A capacitor is sized from its rated current (460.8(A)): it needs its kvar or that current.
+        if (spec.Keyword == "capacitor" && diagnostics.Count == before && !filled.Any(a => a?.Spec.Kind is ArgKind.Current or ArgKind.ReactivePower))
+        {
+            Error(SyntaxCodes.CapacitorRating, line.Tokens[0].Range, "'capacitor' needs its rating in kvar (e.g. 10kvar) or its rated current (e.g. 12A)");
+        }
 
         if (_notShown > 0)
             diagnostics.Add(new Diagnostic(SyntaxCodes.MoreOnLine, Severity.Error, SourceRange.Cover(_notShownFrom, _notShownTo),
@@ -457,6 +462,7 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         Unit.Celsius or Unit.Fahrenheit => kind == ArgKind.Temperature,
         Unit.Percent => kind == ArgKind.Percent,
         Unit.Kva => kind == ArgKind.ApparentPower,
+        Unit.Kvar => kind == ArgKind.ReactivePower,
         Unit.Minute => kind == ArgKind.Duration,
         Unit.Phase => kind == ArgKind.Phases,
         Unit.Inch => kind == ArgKind.TradeSize,
@@ -491,6 +497,7 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         ArgKind.TradeSize => "a trade size in inches (e.g. 3/4in, 1-1/4in)",
         ArgKind.FaultCurrent => $"a {a.Name} in kA (e.g. 42kA)",
         ArgKind.Ratio => "an X/R ratio (e.g. x/r 8)",
+        ArgKind.ReactivePower => "a reactive power (e.g. 10kvar)",
         _ => a.Name,
     };
 

@@ -14,6 +14,17 @@ public static class Overloads
     public static Result<decimal> AbsoluteMaximum(decimal? nameplateAmps, decimal? serviceFactor, decimal? temperatureRiseC) =>
         Limit(nameplateAmps, serviceFactor, temperatureRiseC, 140m, 130m, "NEC 430.32(C)", "Overload maximum when it trips on starting");
 
+    /// <summary>
+    /// The 430.32(A)(1) or (C) limit from a current other than the nameplate (460.9: the improved-power-factor
+    /// current with a capacitor on the load side of the overload), the basis's own steps first.
+    /// </summary>
+    public static Result<decimal> FromBasis(Result<decimal> basis, decimal? serviceFactor, decimal? temperatureRiseC, bool absolute)
+    {
+        if (basis.Value is not { } amps) return basis;
+        var limit = absolute ? AbsoluteMaximum(amps, serviceFactor, temperatureRiseC) : Maximum(amps, serviceFactor, temperatureRiseC);
+        return new Result<decimal>(limit.Value, [.. basis.Steps, .. limit.Steps.Skip(1)], limit.Unavailable);
+    }
+
     private static Result<decimal> Limit(decimal? nameplateAmps, decimal? sf, decimal? rise, decimal high, decimal low, string rule, string label)
     {
         if (nameplateAmps is not { } np)
