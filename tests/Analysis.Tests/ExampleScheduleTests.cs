@@ -19,6 +19,39 @@ public class ExampleScheduleTests
     private static ScheduleRow Row(AnalysisResult a, string tag) => Schedule.Of(a).Rows.Single(r => r.Tag == tag);
 
     [Fact]
+    public void PressLine()
+    {
+        var a = Example("press-line.motors");
+        Assert.Empty(a.Findings);
+
+        // PR-301, 100 hp 460 V wye-delta: Table 430.250 124 A. Line side 125 % = 155 A -> 2/0 AWG (175 A at 75 C).
+        // Leads 72 % x 124 = 89.28 A (430.22(C)) -> 3 AWG (100 A). Overload in the delta leads: 125 % x 118 / sqrt 3 = 85.16 A.
+        var pr = a.Motors.Values.Single(m => m.Tag == "PR-301");
+        Assert.Equal(89.28m, pr.LeadAmpacity!.Value);
+        Assert.Equal("3 AWG", pr.MinimumLeads!.Value.ToString());
+        Assert.Equal(85.16m, decimal.Round(pr.OverloadLimit!.Value!.Value, 2));
+        Assert.Equal(("2/0 AWG; leads 3 AWG", "2/0 AWG; leads 3 AWG"), (Row(a, "PR-301").MinimumWire, Row(a, "PR-301").Wire));
+
+        // TC-302, 30 hp 460 V (40 A) on a 36 A drive with a bypass: 430.122(C) max(45, 50) = 50 A -> 8 AWG (50 A).
+        // Output conductors 430.122(B) 125 % x 40 = 50 A: the branch 8 AWG. Breaker: 430.52 250 % x 40 = 100 A, marked 60 A.
+        var tc = a.Motors.Values.Single(m => m.Tag == "TC-302");
+        Assert.Equal(50m, tc.RequiredAmpacity!.Value);
+        Assert.Equal(60m, tc.MaximumProtection!.Value);
+
+        // HP-303: capacitor 7.5 kvar at 480 V: 7500 / (1.7320508 x 480) = 9.02 A; 135 % = 12.18 A; one third of 8 AWG THHN
+        // at 90 C (55 A) = 18.33 A governs (460.8(A)). Overload from the 26.5 A improved current: 125 % = 33.13 A (460.9).
+        var hp = a.Motors.Values.Single(m => m.Tag == "HP-303");
+        Assert.Equal(9.02m, decimal.Round(hp.CapacitorRatedCurrent!.Value!.Value, 2));
+        Assert.Equal(18.33m, decimal.Round(hp.CapacitorRequiredAmpacity!.Value!.Value, 2));
+        Assert.Equal(33.125m, hp.OverloadLimit!.Value);
+
+        // Feeder: 430.24: 125 % x 124 + 40 + 34 = 229 A -> 4/0 AWG (230 A). 430.62(A): 350 + 40 + 34 = 424 -> 400 A.
+        var f = a.Feeders.Values.Single();
+        Assert.Equal(229m, f.RequiredAmpacity!.Value);
+        Assert.Equal(400m, f.MaximumProtection!.Value);
+    }
+
+    [Fact]
     public void DairyBottlingHall()
     {
         var a = Example("dairy-bottling.motors");

@@ -79,6 +79,7 @@ public sealed class ScheduleDataFormatTests : IDisposable
     [InlineData("cabinet-shop.motors")]
     [InlineData("booster-station.motors")]
     [InlineData("cold-storage.motors")]
+    [InlineData("press-line.motors")]
     public void JsonValidatesAgainstItsSchema(string example)
     {
         var json = Json(example);

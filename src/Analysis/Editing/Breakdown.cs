@@ -86,6 +86,9 @@ public static class Breakdown
         "capacitor" => heading is "Capacitor conductors" or "Overload",
         "capacitor-wire" => heading == "Capacitor conductors",
         "improved-current" => heading == "Overload",
+        "motor-leads" => heading == MotorLeadsHeading,
+        "drive-bypass" => heading == "Branch conductors",
+        "drive-max-protection" => heading == "Short-circuit and ground-fault protection",
         "overload" or "nameplate" or "service-factor" or "temp-rise" => heading is "Full-load current" or "Overload",
         "ground" => heading == "Grounding conductor",
         "length" or "drop-limit" or "power-factor" => heading is "Voltage drop" or FirePumpVoltageHeading,
@@ -96,6 +99,8 @@ public static class Breakdown
         "sccr" or "interrupting" => heading.StartsWith(FaultSections.Heading, StringComparison.Ordinal),
         _ => true,
     };
+
+    private const string MotorLeadsHeading = "Conductors from controller to motor";
 
     /// <summary>A motor's whole calculation, section by section (the hover on its header; the report's calculation sheet).</summary>
     public static IEnumerable<BreakdownSection> MotorSections(MotorResult m)
@@ -110,6 +115,12 @@ public static class Breakdown
                     : $"✗ {w} carries only {Format.Amps(allowable)}; {Format.Amps(needed)} is required");
         }
 
+        if (m.LeadAmpacity is { } leads)
+            // The requirement and the size chosen; the leads' ampacity is read like the branch wire's, so its steps are not repeated.
+            yield return new BreakdownSection(MotorLeadsHeading, leads.Steps.Concat(m.MinimumLeads?.Steps.TakeLast(1) ?? []).ToList(),
+                m.Leads is { } lw && m.LeadsAmpacity?.Value is { } la && leads.Value is { } ln
+                    ? (la >= ln ? "✓ " : "✗ ") + $"{lw}{(m.LeadsWritten ? "" : " (the branch wire: no 'motor-leads' written)")} carries {Format.Amps(la)}{(la >= ln ? " ≥ " : "; required ")}{Format.Amps(ln)}"
+                    : null);
         if (m.FirePumpMinimumProtection is { } fireMin)
             yield return new BreakdownSection("Short-circuit and ground-fault protection", fireMin.Steps,
                 fireMin.Unavailable ?? (m.FirePumpListedDevice ? "✓ listed for fire pump service; its curve was not checked" : Compare(m.ProtectionRating, fireMin.Value, "rating", atMost: false)));

@@ -16,4 +16,6 @@ public static partial class FindingCodes
 {
     public const string CapacitorWireUndersized = "M134";
     public const string CapacitorOverloadBasis = "M135";
+    public const string MotorLeadsUndersized = "M137";
+    public const string AboveDriveMaximum = "M138";
 }

@@ -72,7 +72,10 @@ public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<Fee
             m.Motor.Feeder.Tag?.Value ?? "", m.Tag, m.Motor.Description?.Value ?? "",
             m.Motor.Power is { } p ? p.Value.ToString() + (m.Quantity > 1 ? $" ×{m.Quantity}" : "") : m.IsCompressor ? "compressor" + (m.Quantity > 1 ? $" ×{m.Quantity}" : "") : "",
             m.Volts > 0 ? $"{Format.Number(m.Volts)} V" : "",
-            Amps(m.FullLoadCurrent), Text(m.MinimumWire), m.Wire?.ToString() ?? "",
+            Amps(m.FullLoadCurrent),
+            // The leads' own sizes are shown where they differ from the branch's (the JSON always carries them).
+            Text(m.MinimumWire) + (m.MinimumLeads?.Value is { } ml && ml != m.MinimumWire?.Value ? $"; leads {ml}" : ""),
+            (m.Wire?.ToString() ?? "") + (m.LeadsWritten && m.Leads is { } lw && lw != m.Wire ? $"; leads {lw}" : ""),
             Protection(m), m.ProtectionRating is { } pr ? $"{Format.Amps(pr)} {Short(m.Device)}" : "",
             Amps(m.OverloadLimit), m.Overload is { } o ? Format.Amps(o) : "",
             m.Disconnect?.Value is { } d ? $"{Format.Amps(d.MinimumAmps)}, {Numbers.Horsepower(d.MinimumHorsepower)} hp" : "",

@@ -108,6 +108,18 @@ public sealed class MotorResult(MotorNode motor)
     /// </summary>
     public decimal? EquipmentOtherLoads { get; internal set; }
 
+    /// <summary>The ampacity the conductors between the controller or drive and the motor need (430.22(C), (D), 430.122(B)); null for other starting.</summary>
+    public Result<decimal>? LeadAmpacity { get; internal set; }
+    public Result<WireSpec>? MinimumLeads { get; internal set; }
+    /// <summary>Those conductors: as written ('motor-leads'), else taken to be the branch wire.</summary>
+    public WireSpec? Leads { get; internal set; }
+    /// <summary>The leads are written on the list, not taken to be the branch wire.</summary>
+    public bool LeadsWritten { get; internal set; }
+    public Result<decimal>? LeadsAmpacity { get; internal set; }
+
+    /// <summary>The drive's marked or instructed maximum branch device (430.130(A)(2)), as written.</summary>
+    public decimal? DriveMaximumProtection { get; internal set; }
+
     /// <summary>A power-factor capacitor is written on this motor circuit (Article 460).</summary>
     public bool HasCapacitor { get; internal set; }
 

@@ -81,7 +81,8 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         var dutyRating = DutyRatingOf(Get(motor, m => m.DutyRating)?.Value);
         var starting = Get(motor, m => m.Starting)?.Value ?? StartingMethod.FullVoltage;
         var driveInput = Get(motor, m => m.DriveInputCurrent)?.Value.Value;
-        r.RequiredAmpacity = cache.RequiredAmpacity(new BranchInput(flc, nameplate, duty, dutyRating, starting, driveInput));
+        var bypass = DriveBypass(motor, starting);
+        r.RequiredAmpacity = cache.RequiredAmpacity(new BranchInput(flc, nameplate, duty, dutyRating, starting, driveInput, bypass));
         if (duty != DutyKind.Continuous) r.DutyCycleAmps = r.RequiredAmpacity.Value;
         if (r.RequiredAmpacity.Value is { } required)
         {
@@ -92,6 +93,8 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         {
             Add(FindingCodes.CannotCheck, Severity.Warning, motor.Header.KeywordToken.Range, $"branch conductors cannot be sized: {r.RequiredAmpacity.Unavailable}");
         }
+
+        CheckLeads(motor, r, flc, starting, conditions, designBcd);
 
         var protectionFlc = ProtectionCurrent(rating, flc);
         r.FireService = Get(motor, m => m.FireService)?.Value;
@@ -180,12 +183,14 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
 
     private void CheckWire(MotorNode motor, MotorResult r, decimal required, InstallationConditions conditions, bool designBcd)
     {
+        // The rule the requirement comes from: 430.22 for most motors, 430.122(A)/(C) for a drive.
+        var rule = r.RequiredAmpacity?.Steps is { Length: > 0 } steps && steps[^1].Rule.StartsWith("NEC 430.122", StringComparison.Ordinal) ? steps[^1].Rule : "NEC 430.22";
         var wire = Get(motor, m => m.Wire, out var owner);
         if (wire is null)
         {
             if (r.MinimumWire?.Value is { } min)
                 Add(FindingCodes.NotWritten, Severity.Information, motor.Header.KeywordToken.Range,
-                    $"no wire given; NEC 430.22 needs {Format.Amps(required)}: {min}", Insert(motor, $"wire {min}", "Add the minimum wire size"));
+                    $"no wire given; {rule} needs {Format.Amps(required)}: {min}", Insert(motor, $"wire {min}", "Add the minimum wire size"));
             else
                 Add(FindingCodes.CannotCheck, Severity.Warning, motor.Header.KeywordToken.Range,
                     $"no branch conductor can be chosen for {Format.Amps(required)}: {r.MinimumWire?.Unavailable}");
@@ -204,18 +209,18 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         {
             // A wire whose ampacity the tables cannot give is never passed in silence.
             Add(FindingCodes.CannotCheck, Severity.Warning, RangeOn(motor, owner, wire.Range),
-                $"wire {wire.Value} cannot be checked against the {Format.Amps(required)} NEC 430.22 requires: {r.WireAmpacity.Unavailable}");
+                $"wire {wire.Value} cannot be checked against the {Format.Amps(required)} {rule} requires: {r.WireAmpacity.Unavailable}");
             return;
         }
 
         if (allowable >= required) return;
         if (r.MinimumWire?.Value is { } minimum)
             Add(FindingCodes.WireUndersized, Severity.Error, RangeOn(motor, owner, wire.Range),
-                $"wire {wire.Value} carries {Format.Amps(allowable)} here; NEC 430.22 requires {Format.Amps(required)}: use {minimum}",
+                $"wire {wire.Value} carries {Format.Amps(allowable)} here; {rule} requires {Format.Amps(required)}: use {minimum}",
                 ReplaceOrOverride(motor, owner, "wire", "size", minimum.ToString(), $"Change the wire to {minimum}"));
         else
             Add(FindingCodes.WireUndersized, Severity.Error, RangeOn(motor, owner, wire.Range),
-                $"wire {wire.Value} carries {Format.Amps(allowable)} here; NEC 430.22 requires {Format.Amps(required)}, and {r.MinimumWire?.Unavailable}");
+                $"wire {wire.Value} carries {Format.Amps(allowable)} here; {rule} requires {Format.Amps(required)}, and {r.MinimumWire?.Unavailable}");
     }
 
     /// <summary>430.22(G): 16 and 18 AWG copper only for small currents, and only under conditions the list cannot show.</summary>
@@ -258,6 +263,8 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         r.ProtectionBasis = new ProtectionInput(flc, r.Device, phases, kind, design, efficiency, hardStart, classCc);
         var input = r.ProtectionBasis.Value;
         r.MaximumProtection = cache.MaximumProtection(input);
+        // 430.130(A)(2): the drive's marked or instructed maximum is never exceeded, whatever 430.52 permits.
+        var driveCapped = DriveMaximum(motor, r, starting);
         // 430.52(C)(3), (C)(7), (C)(5): devices permitted only in a listed combination, or rated as marked.
         if (!DeviceInLieuPermitted(motor, r, device, deviceOwner, rating)) return;
         // 430.4: a part-winding motor's devices are limited per winding unless the list says one protects both (the stricter reading when not said).
@@ -295,8 +302,8 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         var value = rating.Value.Value;
         if (value > max)
         {
-            var rule = windings is not null ? "NEC 430.4" : MaximumRule(r.Device, hardStart);
-            Add(windings is null ? FindingCodes.ProtectionTooLarge : FindingCodes.PartWindingProtectionTooLarge, Severity.Error, RangeOn(motor, ratingOwner, rating.Range),
+            var rule = windings is not null ? "NEC 430.4" : driveCapped ? "the drive's marking or instructions (NEC 430.130(A)(2))" : MaximumRule(r.Device, hardStart);
+            Add(driveCapped && windings is null ? FindingCodes.AboveDriveMaximum : windings is null ? FindingCodes.ProtectionTooLarge : FindingCodes.PartWindingProtectionTooLarge, Severity.Error, RangeOn(motor, ratingOwner, rating.Range),
                 $"{deviceName} {unit} {Format.Amps(value)} is above the {Format.Amps(max)} that {rule} allows for {Format.Amps(flc)} full-load current{SmallMotorCombinationNote(r.Device, flc)}",
                 ReplaceOrOverride(motor, ratingOwner, "protection", "rating", MaxText(), $"Change the {unit} to {MaxText()}",
                     overrideText: $"protection {Keywords.Devices.First(d => Equals(d.Value, r.Device)).Canonical} {MaxText()}{windingWord}"));

@@ -278,6 +278,12 @@ public static class Keywords
             "The conductors that connect the capacitor to the motor terminals or the motor circuit conductors (460.8(A))."),
         new("improved-current", [Motor], null, [new("current", Current, true, Check: Positive)],
             "The motor circuit's current at the improved power factor, with the capacitor connected: the overload is selected from it (460.9)."),
+        new("motor-leads", [Motor], null, [new("size", Wire, true)],
+            "The conductors between the controller (or drive) and the motor, where they are not the branch wire: wye-delta 430.22(C), part-winding 430.22(D), drive output 430.122(B)."),
+        new("drive-bypass", [Motor], null, [],
+            "The drive has a bypass device: the line conductors carry the larger of the drive's input and the motor's current (430.122(C))."),
+        new("drive-max-protection", [Motor], null, [new("current", Current, true, Check: Positive)],
+            "The largest branch short-circuit and ground-fault device the drive's instructions or marking permit (430.130(A)(2)): never exceeded."),
         new("hard-start", [Motor], null, [],
             "The motor will not start on the Table 430.52(C)(1) rating: allow the 430.52(C)(1)(b) maximums."),
     ];

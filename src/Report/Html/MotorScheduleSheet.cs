@@ -80,7 +80,13 @@ public static class MotorScheduleSheet
         page.Open("td", "class=\"num\"").Raw(Cells.Json("disconnectMinimumCurrent", m.DisconnectMinimumCurrent))
             .Raw(Cells.Limit("and", "disconnectMinimumPower", m.DisconnectMinimumPower)).Close("td");
         page.Open("td").Raw(Cells.Json("wire", m.Wire, "not written")).Raw(Cells.Limit("min", "minimumWire", m.MinimumWire)).Raw(Cells.Limit("needs", "requiredAmpacity", m.RequiredAmpacity))
-            .Raw(Cells.Limit("carries", "wireAmpacity", m.WireAmpacity)).Close("td");
+            .Raw(Cells.Limit("carries", "wireAmpacity", m.WireAmpacity))
+            // Conductors from the controller or drive to the motor, and a capacitor's, where the motor has them.
+            .Raw(Cells.Limit("leads", "leads", m.Leads)).Raw(Cells.Limit("leads min", "minimumLeads", m.MinimumLeads))
+            .Raw(Cells.Limit("leads need", "leadsRequiredAmpacity", m.LeadsRequiredAmpacity))
+            .Raw(Cells.Limit("capacitor", "capacitorWire", m.CapacitorWire)).Raw(Cells.Limit("capacitor min", "minimumCapacitorWire", m.MinimumCapacitorWire))
+            .Raw(Cells.Limit("capacitor needs", "capacitorWireRequiredAmpacity", m.CapacitorWireRequiredAmpacity))
+            .Raw(Cells.Limit("capacitor rated", "capacitorRatedCurrent", m.CapacitorRatedCurrent)).Close("td");
         page.Open("td").Raw(Cells.Json("ground", m.Ground, "not written")).Raw(Cells.Limit("min", "minimumGround", m.MinimumGround)).Close("td");
         page.Open("td").Raw(Cells.Json("conduit", m.Conduit, "not written")).Raw(Cells.Limit("min", "minimumConduit", m.MinimumConduit))
             .Raw(Cells.Limit("fill", "conduitFill", m.ConduitFill)).Close("td");

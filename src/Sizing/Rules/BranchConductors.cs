@@ -10,7 +10,8 @@ public readonly record struct BranchInput(
     DutyKind Duty = DutyKind.Continuous,
     DutyRating Rating = DutyRating.Continuous,
     StartingMethod Starting = StartingMethod.FullVoltage,
-    decimal? DriveInputAmps = null);
+    decimal? DriveInputAmps = null,
+    bool DriveBypass = false);
 
 /// <summary>Branch-circuit conductor ampacity for a single motor, 430.22.</summary>
 public static class BranchConductors
@@ -23,6 +24,17 @@ public static class BranchConductors
             if (b.DriveInputAmps is not { } input)
                 return Result<decimal>.Missing("needs the drive's rated input current (430.122(A)): write 'starting drive 62A'");
             var required = input * 1.25m;
+            if (b.DriveBypass)
+            {
+                // 430.122(C): with a bypass the motor can run across the line, so the larger of the two currents.
+                var motor = b.FullLoadAmps * 1.25m;
+                var larger = Math.Max(required, motor);
+                return Result<decimal>.Of(larger,
+                    Step.Amps("Drive input at 125 %", required, "NEC 430.122(C)", $"125 % × drive rated input current {Format.Amps(input)}"),
+                    Step.Amps("Motor at 125 %", motor, "NEC 430.122(C)", $"125 % × motor full-load current {Format.Amps(b.FullLoadAmps)} (430.6(A)(1))"),
+                    Step.Amps("Required ampacity", larger, "NEC 430.122(C)", "the drive has a bypass device: the larger of the two"));
+            }
+
             return Result<decimal>.Of(required, Step.Amps("Required ampacity", required, "NEC 430.122(A)",
                 $"125 % × drive rated input current {Format.Amps(input)}"));
         }
@@ -47,6 +59,22 @@ public static class BranchConductors
             steps.Add(Step.Amps("Each of the two winding sets", b.FullLoadAmps * 0.625m, "NEC 430.22(D)", "62.5 % of full-load current for each set"));
         return new Result<decimal>(continuous, [.. steps]);
     }
+
+    /// <summary>
+    /// The ampacity of the conductors between the controller (or drive) and the motor, where they are not
+    /// the branch conductors: wye-delta 72 % (430.22(C)), part-winding 62.5 % (430.22(D)), drive output
+    /// 125 % (430.122(B)), each of the motor's 430.6(A)(1) full-load current. Null for other starting.
+    /// </summary>
+    public static Result<decimal>? LeadAmpacity(decimal fullLoadAmps, StartingMethod starting) => starting switch
+    {
+        StartingMethod.WyeDelta => Result<decimal>.Of(fullLoadAmps * 0.72m, Step.Amps("Controller-to-motor conductors", fullLoadAmps * 0.72m, "NEC 430.22(C)",
+            $"72 % × {Format.Amps(fullLoadAmps)}: the leads carry 58 % of the line current (Informational Note), × 125 %")),
+        StartingMethod.PartWinding => Result<decimal>.Of(fullLoadAmps * 0.625m, Step.Amps("Controller-to-motor conductors, each winding set", fullLoadAmps * 0.625m, "NEC 430.22(D)",
+            $"62.5 % × {Format.Amps(fullLoadAmps)}: each set carries 50 % (Informational Note), × 125 %")),
+        StartingMethod.Drive => Result<decimal>.Of(fullLoadAmps * 1.25m, Step.Amps("Drive output conductors", fullLoadAmps * 1.25m, "NEC 430.122(B)",
+            $"125 % × motor full-load current {Format.Amps(fullLoadAmps)}; the exception for a drive marked suitable for output motor conductor protection is not applied (conservative reading)")),
+        _ => null,
+    };
 
     /// <summary>Table 430.22(E); null where the table has no entry (a continuous-rated motor on short-time duty).</summary>
     public static decimal? DutyPercent(DutyKind duty, DutyRating rating)

@@ -69,6 +69,16 @@ public sealed record MotorData
     public string? MinimumWire { get; init; }
     public string? Wire { get; init; }
     public Measure? WireAmpacity { get; init; }
+    /// <summary>Conductors between the controller (or drive) and the motor: their required ampacity (430.22(C), (D), 430.122(B)); null where the branch wire runs to the motor.</summary>
+    public Measure? LeadsRequiredAmpacity { get; init; }
+    public string? MinimumLeads { get; init; }
+    /// <summary>The leads as written ('motor-leads'), else the branch wire they are taken to be.</summary>
+    public string? Leads { get; init; }
+    /// <summary>A power-factor capacitor's rated current (460.8(A)); null without a capacitor.</summary>
+    public Measure? CapacitorRatedCurrent { get; init; }
+    public Measure? CapacitorWireRequiredAmpacity { get; init; }
+    public string? MinimumCapacitorWire { get; init; }
+    public string? CapacitorWire { get; init; }
     /// <summary>The protective device, in the list's words (inverse-time-breaker, dual-element-fuse, ...).</summary>
     public string ProtectionDevice { get; init; } = "";
     /// <summary>Largest branch short-circuit and ground-fault device permitted (430.52); null for a fire pump.</summary>
