@@ -9,6 +9,9 @@ namespace MotorLang.Sizing;
 /// </summary>
 public sealed record Step(string Label, string Value, string Rule, string Note)
 {
+    /// <summary>The note up to its first parenthesis or semicolon: what a one-line summary of the step keeps.</summary>
+    public string Short => Note.IndexOfAny(['(', ';']) is > 0 and var cut ? Note[..cut].TrimEnd() : Note;
+
     public static Step Amps(string label, decimal amps, string rule, string note) => new(label, Format.Amps(amps), rule, note);
 }
 

@@ -86,7 +86,7 @@ public static class Breakdown
         "capacitor" => heading is "Capacitor conductors" or "Overload",
         "capacitor-wire" => heading == "Capacitor conductors",
         "improved-current" => heading == "Overload",
-        "motor-leads" => heading == MotorLeadsHeading,
+        "motor-leads" => heading == "Branch conductors",
         "drive-bypass" => heading == "Branch conductors",
         "drive-max-protection" => heading == "Short-circuit and ground-fault protection",
         "overload" or "nameplate" or "service-factor" or "temp-rise" => heading is "Full-load current" or "Overload",
@@ -100,7 +100,26 @@ public static class Breakdown
         _ => true,
     };
 
-    private const string MotorLeadsHeading = "Conductors from controller to motor";
+    /// <summary>
+    /// The conductors from the controller or drive to the motor (430.22(C), (D), 430.122(B)), shown with the
+    /// branch conductors: the requirement, then the leads as written or taken to be the branch wire, with the verdict.
+    /// </summary>
+    private static IEnumerable<Step> LeadSteps(MotorResult m)
+    {
+        if (m.LeadAmpacity is not { Value: { } needed } leads) yield break;
+        var requirement = leads.Steps[0];
+        if (m.Leads is not { } wire || m.LeadsAmpacity?.Value is not { } carries)
+        {
+            yield return requirement;
+            if (m.MinimumLeads?.Value is { } minimum)
+                yield return new Step("Minimum motor leads", minimum.ToString(), requirement.Rule, $"smallest size that carries {Format.Amps(needed)}");
+            yield break;
+        }
+
+        // One row: the requirement with its verdict on the leads (as written, or the branch wire they are taken to be).
+        var verdict = (carries >= needed ? "✓ " : "✗ ") + $"{wire}{(m.LeadsWritten ? "" : " (branch wire)")} carries {Format.Amps(carries)}";
+        yield return requirement with { Note = $"{requirement.Short}; {verdict}" };
+    }
 
     /// <summary>A motor's whole calculation, section by section (the hover on its header; the report's calculation sheet).</summary>
     public static IEnumerable<BreakdownSection> MotorSections(MotorResult m)
@@ -108,19 +127,13 @@ public static class Breakdown
         yield return new BreakdownSection(m.IsCompressor ? CompressorCurrent : "Full-load current", m.FullLoadCurrent.Steps, m.FullLoadCurrent.Unavailable);
         if (m.RequiredAmpacity is { } req)
         {
-            yield return new BreakdownSection("Branch conductors", req.Steps.Concat(m.MinimumWire?.Steps ?? []).ToList(), req.Unavailable);
+            yield return new BreakdownSection("Branch conductors", req.Steps.Concat(m.MinimumWire?.Steps ?? []).Concat(LeadSteps(m)).ToList(), req.Unavailable);
             if (m.Wire is { } w && m.WireAmpacity is { Value: { } allowable } written && req.Value is { } needed)
                 yield return new BreakdownSection($"Written wire {w}", written.Steps, allowable >= needed
                     ? $"✓ {w} carries {Format.Amps(allowable)} ≥ {Format.Amps(needed)}"
                     : $"✗ {w} carries only {Format.Amps(allowable)}; {Format.Amps(needed)} is required");
         }
 
-        if (m.LeadAmpacity is { } leads)
-            // The requirement and the size chosen; the leads' ampacity is read like the branch wire's, so its steps are not repeated.
-            yield return new BreakdownSection(MotorLeadsHeading, leads.Steps.Concat(m.MinimumLeads?.Steps.TakeLast(1) ?? []).ToList(),
-                m.Leads is { } lw && m.LeadsAmpacity?.Value is { } la && leads.Value is { } ln
-                    ? (la >= ln ? "✓ " : "✗ ") + $"{lw}{(m.LeadsWritten ? "" : " (the branch wire: no 'motor-leads' written)")} carries {Format.Amps(la)}{(la >= ln ? " ≥ " : "; required ")}{Format.Amps(ln)}"
-                    : null);
         if (m.FirePumpMinimumProtection is { } fireMin)
             yield return new BreakdownSection("Short-circuit and ground-fault protection", fireMin.Steps,
                 fireMin.Unavailable ?? (m.FirePumpListedDevice ? "✓ listed for fire pump service; its curve was not checked" : Compare(m.ProtectionRating, fireMin.Value, "rating", atMost: false)));

@@ -72,7 +72,7 @@ public static class BranchConductors
         StartingMethod.PartWinding => Result<decimal>.Of(fullLoadAmps * 0.625m, Step.Amps("Controller-to-motor conductors, each winding set", fullLoadAmps * 0.625m, "NEC 430.22(D)",
             $"62.5 % × {Format.Amps(fullLoadAmps)}: each set carries 50 % (Informational Note), × 125 %")),
         StartingMethod.Drive => Result<decimal>.Of(fullLoadAmps * 1.25m, Step.Amps("Drive output conductors", fullLoadAmps * 1.25m, "NEC 430.122(B)",
-            $"125 % × motor full-load current {Format.Amps(fullLoadAmps)}; the exception for a drive marked suitable for output motor conductor protection is not applied (conservative reading)")),
+            $"125 % × motor full-load current {Format.Amps(fullLoadAmps)} (its exception for drives marked for output conductor protection not applied)")),
         _ => null,
     };
 
