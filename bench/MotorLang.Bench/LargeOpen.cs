@@ -14,15 +14,8 @@ internal static class LargeOpen
     {
         var motors = (int)(megabytes * 1_000_000L / 215); // the generator writes about 215 bytes a motor
         var text = MotorListGenerator.Generate(motors);
-        var info = new ProcessStartInfo("dotnet", ["exec", motorlang, "lsp", "--debounce-ms", "0"])
-        {
-            RedirectStandardInput = true, RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false,
-        };
-        using var process = Process.Start(info)!;
-        process.ErrorDataReceived += (_, _) => { };
-        process.BeginErrorReadLine();
-        var client = new LspClient(process.StandardInput.BaseStream, process.StandardOutput.BaseStream);
-        await client.InitializeAsync(Environment.ProcessId);
+        var (started, client) = await ServerProcess.StartAsync(motorlang);
+        using var process = started;
         const string uri = "file:///bench/large.motors";
         var clock = Stopwatch.StartNew();
         await client.Open(uri, text);

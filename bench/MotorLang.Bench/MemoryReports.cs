@@ -35,15 +35,8 @@ public static class MemoryReports
     /// </summary>
     public static async Task Process(int motors, string motorlang)
     {
-        var info = new ProcessStartInfo("dotnet", ["exec", motorlang, "lsp", "--debounce-ms", "0"])
-        {
-            RedirectStandardInput = true, RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false,
-        };
-        using var process = System.Diagnostics.Process.Start(info)!;
-        process.ErrorDataReceived += (_, _) => { };
-        process.BeginErrorReadLine();
-        var client = new LspClient(process.StandardInput.BaseStream, process.StandardOutput.BaseStream);
-        await client.InitializeAsync(Environment.ProcessId);
+        var (started, client) = await ServerProcess.StartAsync(motorlang);
+        using var process = started;
         Console.WriteLine($"started: {Resident(process)}");
         var text = MotorListGenerator.Generate(motors);
         const string uri = "file:///bench/process.motors";

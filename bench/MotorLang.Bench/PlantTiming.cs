@@ -87,15 +87,8 @@ internal static class PlantTiming
 
     private static async Task Server(string motorlang, string dir)
     {
-        var info = new ProcessStartInfo("dotnet", ["exec", motorlang, "lsp", "--debounce-ms", "0"])
-        {
-            RedirectStandardInput = true, RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false,
-        };
-        using var process = Process.Start(info)!;
-        process.ErrorDataReceived += (_, _) => { };
-        process.BeginErrorReadLine();
-        var client = new LspClient(process.StandardInput.BaseStream, process.StandardOutput.BaseStream);
-        await client.InitializeAsync(Environment.ProcessId);
+        var (started, client) = await ServerProcess.StartAsync(motorlang);
+        using var process = started;
         var file = Path.Combine(dir, "mcc-002.motors");
         var uri = new Uri(file).AbsoluteUri;
         var switchboard = new Uri(Path.Combine(dir, "switchboard.motors")).AbsoluteUri;
