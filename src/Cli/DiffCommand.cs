@@ -25,7 +25,7 @@ public static class DiffCommand
             {
                 var plantChanges = PlantDiff.Compare(plants.Before, plants.After);
                 if (result.GetValue(format) == "json")
-                    stdout.WriteLine(JsonSerializer.Serialize(plantChanges, JsonReport.Options));
+                    stdout.WriteLine(DiffJson.Write(plantChanges));
                 else if (plantChanges.Count == 0)
                     stdout.WriteLine("no changes");
                 else
@@ -37,7 +37,7 @@ public static class DiffCommand
             var after = Analyzer.Analyze(Read(result.GetValue(newArg)!));
             var changes = ListDiff.Compare(before, after);
             if (result.GetValue(format) == "json")
-                stdout.WriteLine(JsonSerializer.Serialize(changes, JsonReport.Options));
+                stdout.WriteLine(DiffJson.Write(changes));
             else if (changes.Count == 0)
                 stdout.WriteLine("no changes");
             else

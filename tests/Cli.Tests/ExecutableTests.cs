@@ -172,4 +172,37 @@ public sealed class ExecutableTests : IDisposable
         var csv = Executable.Run(_dir, "schedule", folder, "--format", "csv", "--table", "feeders");
         Assert.Contains("switchboard.motors", csv.Out);
     }
+
+    [Fact]
+    public void DiffJsonOfAListAndOfAPlantMatchesItsSchema()
+    {
+        var schema = Path.Combine(Executable.RepoRoot, "docs", "schemas", "diff.schema.json");
+        var before = Path.Combine(_dir, "before.motors");
+        var after = Path.Combine(_dir, "after.motors");
+        File.WriteAllText(before, "feeder MCC 480V 3ph\n  motor P-301 15hp\n    wire 10 AWG\n  motor P-302 5hp\n");
+        File.WriteAllText(after, "feeder MCC 480V 3ph\n  motor P-301 30hp\n    wire 10 AWG\n  motor P-303 5hp\n");
+        var (_, json, err) = Executable.Run(_dir, "diff", before, after, "--format", "json");
+        AssertValid(schema, json);
+        var changes = JsonNode.Parse(json)!.AsArray();
+        // Change kinds are words; 30 hp 480 V is 40 A (NFPA 70-2023 Table 430.250), 15 hp 21 A.
+        var byTag = changes.ToDictionary(c => (string)c!["tag"]!, c => c!);
+        Assert.Equal(("changed", "changed", "added", "removed"),
+            ((string)byTag["MCC"]["change"]!, (string)byTag["P-301"]["change"]!, (string)byTag["P-303"]["change"]!, (string)byTag["P-302"]["change"]!));
+        Assert.Contains(byTag["P-301"]["results"]!.AsArray(), r => (string)r!["quantity"]! == "FLC" && (string)r["old"]! == "21 A" && (string)r["new"]! == "40 A");
+
+        // A plant against itself at HEAD: the object form, no changes.
+        var plant = Path.Combine(_dir, "plant");
+        Directory.CreateDirectory(plant);
+        File.WriteAllText(Path.Combine(plant, "swbd.motors"), "project \"P\"\n  plant\nfeeder SWBD 480V 3ph\n");
+        File.WriteAllText(Path.Combine(plant, "mcc.motors"), "feeder MCC 480V 3ph\n  from SWBD\n  motor M-1 10hp\n");
+        Executable.Git(plant, "init", "-q");
+        Executable.Git(plant, "add", ".");
+        Executable.Git(plant, "commit", "-q", "-m", "first");
+        File.WriteAllText(Path.Combine(plant, "mcc.motors"), "feeder MCC 480V 3ph\n  from SWBD\n  motor M-1 20hp\n");
+        var plantDiff = Executable.Run(plant, "diff", "HEAD", ".", "--format", "json");
+        Assert.True(plantDiff.Out.Length > 0, plantDiff.Err + err);
+        AssertValid(schema, plantDiff.Out);
+        var records = JsonNode.Parse(plantDiff.Out)!["records"]!.AsArray();
+        Assert.Contains(records, r => (string)r!["file"]! == "mcc.motors" && (string)r["change"]!["tag"]! == "M-1" && (string)r["change"]!["change"]! == "changed");
+    }
 }
