@@ -58,7 +58,7 @@ public static class ScheduleCommand
                 "csv" => ScheduleCsv.Write(ScheduleDataBuilder.Of(analysis, source), result.GetValue(table)!),
                 "markdown" => Markdown(schedule),
                 "json" => ScheduleJson.Write(ScheduleDataBuilder.Of(analysis, source)),
-                _ => ScheduleTable.Render(schedule, target is null && env.OutputIsTerminal ? env.TerminalWidth : null, FeederHeaders, FeederCells),
+                _ => ScheduleTable.Render(schedule, target is null && env.OutputIsTerminal ? env.TerminalWidth : null, FeederHeaders(schedule), FeederCells(schedule)),
             };
             if (target is null) stdout.Write(text);
             else SourceFiles.WriteOutput(target, System.Text.Encoding.UTF8.GetBytes(text));
@@ -109,8 +109,8 @@ public static class ScheduleCommand
             if (analysis.Apart.Contains(member.Name)) sb.Append("(not read: see 'motorlang check')\n\n");
             else
             {
-                var part = new Schedule(rows, feeders);
-                sb.Append(markdown ? Markdown(part) : ScheduleTable.Render(part, width, FeederHeaders, FeederCells)).Append('\n');
+                var part = new Schedule(rows, feeders) { ShowsFaultCurrent = whole.ShowsFaultCurrent };
+                sb.Append(markdown ? Markdown(part) : ScheduleTable.Render(part, width, FeederHeaders(part), FeederCells(part))).Append('\n');
             }
         }
 
@@ -121,10 +121,18 @@ public static class ScheduleCommand
         return (sb.ToString(), analysis.HasErrors);
     }
 
-    private static readonly string[] FeederHeaders =
+    private static readonly string[] FeederColumns =
         ["Feeder", "Volts", "Load", "Required", "Min wire", "Wire", "Max protection", "Protection", "Min ground", "Ground", "Voltage drop"];
 
-    private static string[] FeederCells(FeederTotals f) =>
+    /// <summary>The feeder columns; a list with a 'source' adds the fault current at each bus.</summary>
+    private static string[] FeederHeaders(Schedule s) => s.ShowsFaultCurrent ? [.. FeederColumns, ScheduleTable.FaultColumn] : FeederColumns;
+
+    private static Func<FeederTotals, string[]> FeederCells(Schedule s) => f =>
+        s.ShowsFaultCurrent
+            ? [.. Cells(f), f.FaultCurrent]
+            : Cells(f);
+
+    private static string[] Cells(FeederTotals f) =>
         [f.Tag, f.Volts, f.CalculatedLoad, f.RequiredAmpacity, f.MinimumWire, f.Wire, f.MaximumProtection, f.Protection, f.MinimumGround, f.Ground, f.VoltageDrop];
 
     public static string Markdown(Schedule s)
@@ -135,9 +143,9 @@ public static class ScheduleCommand
         Row(ScheduleRow.Headers.Select(_ => "---"));
         foreach (var r in s.Rows) Row(r.Cells);
         sb.Append("\n**Feeders**\n\n");
-        Row(FeederHeaders);
-        Row(FeederHeaders.Select(_ => "---"));
-        foreach (var f in s.Feeders) Row(FeederCells(f));
+        Row(FeederHeaders(s));
+        Row(FeederHeaders(s).Select(_ => "---"));
+        foreach (var f in s.Feeders) Row(FeederCells(s)(f));
         return sb.ToString();
     }
 }

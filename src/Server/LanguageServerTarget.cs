@@ -289,9 +289,9 @@ public sealed class LanguageServerTarget
             ? []
             : InPlant(s, ct) is { } plant
             ? PlantBreakdown.Feeders(plant.View.Analysis, plant.Name).Select(f => new CodeLens(Convert.ToLsp(f.Header),
-                new Command(Breakdown.FeederSummary(f.Feeder), "motorlang.showSchedule", [p.TextDocument.Uri]))).ToArray()
+                new Command(Breakdown.FeederSummary(f.Feeder, plant.View.Analysis.Joined?.Power), "motorlang.showSchedule", [p.TextDocument.Uri]))).ToArray()
             : s.Analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index).Select(f => new CodeLens(Convert.ToLsp(f.Feeder.Header.Range),
-                new Command(Breakdown.FeederSummary(f), "motorlang.showSchedule", [p.TextDocument.Uri]))).ToArray());
+                new Command(Breakdown.FeederSummary(f, s.Analysis.Power), "motorlang.showSchedule", [p.TextDocument.Uri]))).ToArray());
 
     [JsonRpcMethod("textDocument/definition", UseSingleObjectParameterDeserialization = true)]
     public Task<Location?> Definition(TextDocumentPositionParams p, CancellationToken ct) => Read(p.TextDocument.Uri, ct, s =>

@@ -24,8 +24,8 @@ public class FaultStudyTests
     public void TheExamplePlantShowsItsPlantedMistakesAndNothingElse()
     {
         var a = Analyzer.Analyze(Packhouse);
-        // M216: SWBD-1 feeds a 208 V panel through a transformer, whose load it does not add (docs/checks.md).
-        Assert.Equal(["M216@12", "M500@25", "M502@37"], Codes(a));
+        // SWBD-1 writes no conductors or device (M301 says what they need); MCC-1's 35 kA breaker and CV-1's 5 kA starter are the planted mistakes.
+        Assert.Equal(["M301@12", "M301@12", "M301@12", "M500@25", "M502@37"], Codes(a));
     }
 
     [Fact]
@@ -161,5 +161,23 @@ public class FaultStudyTests
         var text = Packhouse.Replace("  motor P-1 \"Flume water pump\" 25hp", "  load P-1 \"Flume water pump\" 1A");
         var without = Analyzer.Analyze(text).Power.Feeders.Values.Single(f => f.Feeder.Tag!.Value == "MCC-1").Bus.MotorAmps!.Value;
         Assert.True(without < with);
+    }
+
+    [Fact]
+    public void TheScheduleAndTheFeederSummaryShowTheFaultCurrentAtEachBus()
+    {
+        var a = Analyzer.Analyze(Packhouse);
+        var schedule = Reports.Schedule.Of(a);
+        Assert.True(schedule.ShowsFaultCurrent);
+        var mcc = schedule.Feeders.Single(f => f.Tag == "MCC-1");
+        // 13,577 A bolted (hand calculation in Sizing.Tests FaultCurrentTests) and 4 × 55.24 A = 220.95 A from the motors; X/R 1.19.
+        Assert.Equal("13.58 kA + 0.22 motors, X/R 1.2", mcc.FaultCurrent);
+        var summary = Breakdown.FeederSummary(a.Feeders.Values.Single(f => f.Tag == "MCC-1"), a.Power);
+        Assert.EndsWith("fault 13.8 kA with motors, X/R 1.2", summary);
+        // Without a source neither shows anything about fault current.
+        var none = Analyzer.Analyze(Lines(Mcc, "  motor P-1 10hp"));
+        Assert.False(Reports.Schedule.Of(none).ShowsFaultCurrent);
+        Assert.Equal("", Reports.Schedule.Of(none).Feeders.Single().FaultCurrent);
+        Assert.DoesNotContain("fault", Breakdown.FeederSummary(none.Feeders.Values.Single(), none.Power));
     }
 }

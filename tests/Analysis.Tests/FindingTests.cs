@@ -274,4 +274,29 @@ public class FindingTests
         // 5 hp at 208 V: 16.7 A (Table 430.250); 430.24: 125 % = 20.88 A.
         Assert.Equal(20.875m, a.Feeders.Values.Single(x => x.Tag == "P").RequiredAmpacity!.Value);
     }
+
+    [Fact]
+    public void M216_NotOnTheFeederThatSuppliesAWrittenTransformer()
+    {
+        // The 208 V panel writes its transformer: the 480 V feeder carries the transformer, not the panel's 208 V currents.
+        var text = Text([.. Base, "feeder P 208V 3ph", "  from F", "  transformer 75kVA 480V 208V 5% x/r 4", "  motor N 5hp"]);
+        var a = Analyzer.Analyze(text);
+        Assert.DoesNotContain(a.Findings, x => x.Code == FindingCodes.SuppliesAnotherVoltage);
+        var f = a.Feeders.Values.Single(x => x.Tag == "F");
+        var without = Analyzer.Analyze(Text(Base)).Feeders.Values.Single(x => x.Tag == "F");
+        // Rated primary current 75,000 VA ÷ (√3 × 480 V) = 90.21 A, counted as a continuous load (the conservative
+        // reading, docs/checks.md M216): 430.24 adds 125 % of 90.211 A = 112.76 A; the running load adds 90.21 A.
+        Assert.Equal(112.76m, decimal.Round(f.RequiredAmpacity!.Value!.Value - without.RequiredAmpacity!.Value!.Value, 2));
+        Assert.Equal(90.21m, decimal.Round(f.CalculatedLoad - without.CalculatedLoad, 2));
+        // A single-phase 25 kVA transformer on the same feeder draws 25,000 ÷ 480 = 52.08 A.
+        var single = Analyzer.Analyze(Text([.. Base, "feeder Q 240V 1ph", "  from F", "  transformer 25kVA 480V 240V 3% x/r 2", "  motor N 2hp"]));
+        Assert.DoesNotContain(single.Findings, x => x.Code == FindingCodes.SuppliesAnotherVoltage);
+        Assert.Equal(52.08m, decimal.Round(single.Feeders.Values.Single(x => x.Tag == "F").CalculatedLoad - without.CalculatedLoad, 2));
+        // A transformer whose primary is not the feeder's voltage says nothing about what it draws here: still M216.
+        var wrong = Analyzer.Analyze(Text([.. Base, "feeder P 208V 3ph", "  from F", "  transformer 75kVA 600V 208V 5% x/r 4", "  motor N 5hp"]));
+        Assert.Contains(wrong.Findings, x => x.Code == FindingCodes.SuppliesAnotherVoltage);
+        // A fire pump behind the transformer keeps the feeder unsized (695.4(B)(2) needs every part).
+        var fire = Analyzer.Analyze(Text([.. Base, "feeder P 208V 3ph", "  from F", "  transformer 75kVA 480V 208V 5% x/r 4", "  motor N 5hp", "    fire-service pump"]));
+        Assert.Contains(fire.Findings, x => x.Code == FindingCodes.SuppliesAnotherVoltage);
+    }
 }

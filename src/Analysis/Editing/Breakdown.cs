@@ -218,13 +218,18 @@ public static class Breakdown
         return parts.Count == 0 ? null : string.Join(" · ", parts);
     }
 
-    /// <summary>The feeder totals shown above a feeder.</summary>
-    public static string FeederSummary(FeederResult f) =>
+    /// <summary>The feeder totals shown above a feeder, and with a 'source' the fault current at its bus (with the motors' share, what ratings are checked against).</summary>
+    public static string FeederSummary(FeederResult f, Power.FaultStudy? power = null) =>
         string.Join(" · ", new[]
         {
             $"load {Format.Amps(f.CalculatedLoad)}",
             f.MinimumWire?.Value is { } w ? $"min wire {w}" : null,
             f.MaximumProtection?.Value is { } p ? $"max protection {Format.Amps(p)}" : null,
             f.FirePumpMinimumProtection?.Value is { } fp ? $"min protection {Format.Amps(fp)} (fire pump)" : null,
+            power is { HasSource: true } && power.Feeders.GetValueOrDefault(f.Feeder)?.Bus is { } bus
+                ? bus.WithMotors.Value is { } available
+                    ? $"fault {MotorLang.Sizing.Rules.Faults.FaultCurrent.KiloAmps(available)} with motors, X/R {(bus.XOverR is { } k ? Format.Number(decimal.Round(k, 1)) : "—")}"
+                    : "fault current not worked out"
+                : null,
         }.OfType<string>());
 }

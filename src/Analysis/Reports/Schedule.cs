@@ -42,6 +42,9 @@ public sealed record FeederTotals(string Tag, string Volts, string CalculatedLoa
 
     /// <summary>The rules that bear on this feeder but that MotorLang does not check.</summary>
     public IReadOnlyList<NotCheckedNote> NotChecked { get; init; } = [];
+
+    /// <summary>The available fault current at the feeder's bus, e.g. "13.58 kA + 0.22 motors, X/R 2.1"; empty without a 'source'.</summary>
+    public string FaultCurrent { get; init; } = "";
 }
 
 /// <summary>A rule not checked on a circuit, as the schedule reports it: the rule, what it covers, and why it is not checked.</summary>
@@ -53,13 +56,16 @@ public sealed record NotCheckedNote(string Rule, string Text, string Reason)
 /// <summary>The motor schedule of a document: one row per motor, then each feeder's totals.</summary>
 public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<FeederTotals> Feeders)
 {
+    /// <summary>The list writes a 'source', so the feeders' fault currents are shown.</summary>
+    public bool ShowsFaultCurrent { get; init; }
+
     public static Schedule Of(AnalysisResult analysis)
     {
         // Findings by line, once: each row reads its own lines, so the schedule is linear in the list.
         var byLine = analysis.Findings.ToLookup(f => f.Range.Start.Line);
         var rows = analysis.Motors.Values.OrderBy(m => m.Motor.Header.Line.Index).Select(m => Row(m, byLine, analysis.Power)).ToList();
         var feeders = analysis.Feeders.Values.OrderBy(f => f.Feeder.Header.Line.Index).Select(f => Totals(f, analysis.Power)).ToList();
-        return new Schedule(rows, feeders);
+        return new Schedule(rows, feeders) { ShowsFaultCurrent = analysis.Power.HasSource };
     }
 
     private static ScheduleRow Row(MotorResult m, ILookup<int, Finding> byLine, Power.FaultStudy power)
@@ -96,7 +102,16 @@ public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<Fee
     {
         RulesApplied = Coverage.RulesApplied.Of(f),
         NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(f, power)),
+        FaultCurrent = Fault(power.HasSource ? power.Feeders.GetValueOrDefault(f.Feeder)?.Bus : null),
     };
+
+    /// <summary>The bolted value, the motors' share apart (an approximation), and X/R; "not worked out" where the study could not.</summary>
+    private static string Fault(Power.FaultPoint? at) =>
+        at is null ? ""
+        : at.Bolted.Value is not { } bolted ? "not worked out"
+        : $"{FaultCurrentText(bolted)}{(at.MotorAmps is > 0 and { } m ? $" + {FaultCurrentText(m).Replace(" kA", "")} motors" : "")}, X/R {(at.XOverR is { } k ? Format.Number(decimal.Round(k, 1)) : "—")}";
+
+    private static string FaultCurrentText(decimal amps) => MotorLang.Sizing.Rules.Faults.FaultCurrent.KiloAmps(amps);
 
     private static string Protection(MotorResult m) =>
         m.FirePumpMinimumProtection?.Value is { } min ? $"≥ {Format.Amps(min)} {Short(m.Device)}" :

@@ -44,6 +44,43 @@ internal sealed partial class FeederSizer
         f.Voltage is { } v && f.Phases is { } p && (v.Value.Value != volts || p.Value != phases);
 
     /// <summary>
+    /// A feeder supplied through the transformer written at its head, as the supplying feeder sees
+    /// it: one continuous load at the transformer's rated primary current (kVA at the primary
+    /// voltage, single-phase kVA ÷ V), the conservative reading of docs/checks.md (M216). Null
+    /// where that cannot stand for what is behind it: no transformer, no kVA, a primary voltage
+    /// other than the supplying feeder's, a three-phase transformer on a single-phase feeder, or a
+    /// fire pump behind it (its supply rules, 695.4(B)(2), need every part).
+    /// </summary>
+    private FeederLoad? TransformerLoad(FeederNode child, decimal volts, Phases phases)
+    {
+        if (child.Transformer is null || child.TransformerRating is not { } kva || child.TransformerPrimary is not { } vp || vp.Value.Value != volts) return null;
+        if (child.Phases?.Value is not { } behind || behind == Phases.Dc || phases == Phases.Dc) return null;
+        if (behind == Phases.Three && phases != Phases.Three) return null;
+        if (FirePumpBehind(child)) return null;
+        var amps = behind == Phases.Three ? kva.Value.Value * 1000m / (Sqrt3 * volts) : kva.Value.Value * 1000m / volts;
+        return new FeederLoad(child.Tag?.Value ?? "", amps, true);
+    }
+
+    private Dictionary<FeederNode, bool>? _firePumpBehind;
+
+    /// <summary>A fire pump motor or load on the feeder or anywhere below it (remembered per transformer feeder).</summary>
+    private bool FirePumpBehind(FeederNode feeder)
+    {
+        _firePumpBehind ??= [];
+        if (_firePumpBehind.TryGetValue(feeder, out var known)) return known;
+        var found = false;
+        foreach (var f in Downstream(feeder))
+        {
+            Steps += 1 + f.Motors.Count + f.Loads.Count;
+            found = f.Motors.Any(m => motors.GetValueOrDefault(m) is { FireService: FireServiceRole.FirePump })
+                    || f.Loads.Any(l => l.FireService?.Value == FireServiceRole.FirePump);
+            if (found) break;
+        }
+
+        return _firePumpBehind[feeder] = found;
+    }
+
+    /// <summary>
     /// The summary of what <paramref name="top"/> carries, kVA loads converted at the feeder's
     /// voltage and instantaneous-trip branch breakers counted for its device type. Summaries of
     /// the feeders below are kept, so each is worked out once per pass.
@@ -121,6 +158,13 @@ internal sealed partial class FeederSizer
         foreach (var child in children ?? [])
         {
             Steps++;
+            if (OtherVoltage(child, volts, phases) && TransformerLoad(child, volts, phases) is { } transformer)
+            {
+                // Through a transformer written on the feeder: the supplying side carries the transformer, not the currents behind it.
+                ownLoads.Add(transformer);
+                continue;
+            }
+
             if (OtherVoltage(child, volts, phases))
             {
                 // Scanning in the order written, an earlier feeder at the same depth stays first.

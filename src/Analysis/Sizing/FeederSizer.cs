@@ -50,7 +50,9 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
         {
             Add(FindingCodes.SuppliesAnotherVoltage, Severity.Warning, feeder.Header.KeywordToken.Range,
                 $"the feeder cannot be sized: {other.Tag?.Value} ({other.Voltage?.Value}) is supplied from it at another voltage, so through a transformer, " +
-                "whose load and protection (NEC 450.3) MotorLang does not work out");
+                (other.Transformer is null
+                    ? $"and none is written on it: write 'transformer <kVA> {Format.Number(r.Volts)}V {other.Voltage?.Value}' on {other.Tag?.Value} so its rated primary current is counted here"
+                    : "whose kVA, primary voltage or phases do not say what it draws here (or a fire pump is behind it, whose supply rules need every part)"));
             return r;
         }
 

@@ -17,7 +17,10 @@ public static class ScheduleTable
     private static readonly string[] DropOrder =
         ["Voltage drop", "Ground", "Min ground", "Disconnect", "Overload", "Overload limit", "Volts", "Feeder", "Power"];
 
-    private static readonly string[] FeederDropOrder = ["Voltage drop", "Ground", "Min ground", "Volts", "Load"];
+    /// <summary>The feeder column of a list with a 'source': the available fault current at each bus.</summary>
+    public const string FaultColumn = "Fault current";
+
+    private static readonly string[] FeederDropOrder = ["Voltage drop", "Ground", "Min ground", "Volts", "Load", FaultColumn];
 
     public static readonly string[] Legend =
     [
@@ -27,6 +30,10 @@ public static class ScheduleTable
         "Feeders: Load = the calculated load of its motors and other loads (430.24); Required = the ampacity its conductors need.",
         "Feeders: Load = the calculated load of its motors and other loads (430.24); Required = the ampacity its conductors need.",
     ];
+
+    /// <summary>Under a table with the fault current column.</summary>
+    public const string FaultLegend =
+        "Fault current = three-phase bolted fault current at the feeder's bus from the source (ohmic method), + the running motors' share (≈ 4 × FLC, an approximation), and X/R; each motor's controller is taken to stand at its feeder's bus.";
 
     public static string Render(Schedule s, int? terminalWidth, string[] feederHeaders, Func<FeederTotals, string[]> feederCells)
     {
@@ -39,7 +46,8 @@ public static class ScheduleTable
         var proseWidth = Math.Min(width, 100);
         if (dropped.Count > 0)
             text += Wrap($"Not shown, to fit {width} columns: {string.Join(", ", dropped)}. For every column, widen the terminal, or use --format markdown or csv (or pipe the output).", proseWidth);
-        return text + "\n" + string.Concat(Legend.Select(l => Wrap(l, proseWidth)));
+        var legend = feederHeaders.Contains(FaultColumn) ? [.. Legend, FaultLegend] : Legend;
+        return text + "\n" + string.Concat(legend.Select(l => Wrap(l, proseWidth)));
     }
 
     /// <summary>Breaks prose at spaces so no line is wider than the terminal.</summary>

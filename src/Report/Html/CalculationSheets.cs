@@ -36,7 +36,9 @@ public static class CalculationSheets
                 ("Protection", Labels.Protection(m.ProtectionRating, m.Device, null, null)),
                 ("Overload", m.Overload is { } o ? Format.Amps(o) : "not written"),
             ]);
-            Sections(page, Breakdown.MotorSections(m));
+            Sections(page, analysis.Power.HasSource && analysis.Power.AtController(m.Motor) is { } bus
+                ? Breakdown.MotorSections(m).Concat(FaultSections.ForMotor(m.Motor, bus))
+                : Breakdown.MotorSections(m));
             Coverage(page, CircuitCoverage.For(m, analysis.Power));
             Findings(page, byLine, lines, m.Motor.Header.Line.Index, m.Motor.LastLine);
             page.SheetEnd();
@@ -55,7 +57,9 @@ public static class CalculationSheets
                 ("Wire, ground", Labels.Conductors(f.Wire, null, f.Ground)),
                 ("Protection", Labels.Protection(f.ProtectionRating, f.Feeder.Protection?.Value, null, null)),
             ]);
-            Sections(page, Breakdown.FeederSections(f));
+            Sections(page, analysis.Power.HasSource && analysis.Power.Feeders.GetValueOrDefault(f.Feeder) is { } fault
+                ? Breakdown.FeederSections(f).Concat(FaultSections.ForFeeder(fault))
+                : Breakdown.FeederSections(f));
             Coverage(page, CircuitCoverage.For(f, analysis.Power));
             Findings(page, byLine, lines, f.Feeder.Header.Line.Index, f.Feeder.LastOwnLine);
             page.SheetEnd();

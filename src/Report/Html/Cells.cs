@@ -26,6 +26,9 @@ public static class Cells
 
     public static string Limit(string word, string field, string? value) => string.IsNullOrEmpty(value) ? "" : $"<small>{word} {Marked(field, value)}</small>";
 
+    public static string Limit(string word, string field, decimal? value) =>
+        value is { } v ? $"<small>{word} {Marked(field, v.ToString(CultureInfo.InvariantCulture))}</small>" : "";
+
     public static string Phases(int? phases) => phases switch { 3 => " 3ph", 1 => " 1ph", 0 => " dc", _ => "" };
 
     private static string Marked(string field, string text) => $"<span data-json=\"{field}\">{Svg.E(text)}</span>";

@@ -9,11 +9,15 @@ public static class FeederScheduleSheet
     private static readonly string[] Headers =
         ["Feeder", "Description", "Supplied from", "V / ph", "Motors", "Load", "Required ampacity", "Phase conductors", "Protection", "Grounding", "Conduit", "Length", "Drop", "Status"];
 
+    private const string FaultHeader = "Fault current at bus";
+
     public static void Write(Page page, AnalysisResult analysis, ScheduleData data, SheetTitle block)
     {
         page.SheetStart("feeder-schedule", "Feeder schedule", block, "landscape");
+        // A list with a 'source' shows the fault current at each bus; others keep the sheet as it was.
+        var fault = analysis.Power.HasSource;
         page.Open("table", "class=\"schedule feeders\"").Open("thead").Open("tr");
-        foreach (var h in Headers) page.El("th", h);
+        foreach (var h in fault ? [.. Headers[..^1], FaultHeader, Headers[^1]] : Headers) page.El("th", h);
         page.Close("tr").Close("thead").Open("tbody");
         foreach (var f in data.Feeders)
         {
@@ -37,12 +41,17 @@ public static class FeederScheduleSheet
                 .Raw(Cells.Limit("fill", "conduitFill", f.ConduitFill)).Close("td");
             page.Open("td", "class=\"num\"").Raw(Cells.Json("length", f.Length, "not written")).Close("td");
             page.Open("td", "class=\"num\"").Raw(Cells.Json("voltageDrop", f.VoltageDrop)).Raw(Cells.Limit("from source", "totalVoltageDrop", f.TotalVoltageDrop)).Close("td");
+            if (fault)
+                page.Open("td", "class=\"num\"").Raw(Cells.Json("faultCurrent", f.FaultCurrent, "not worked out"))
+                    .Raw(Cells.Limit("with motors", "faultCurrentWithMotors", f.FaultCurrentWithMotors)).Raw(Cells.Limit("X/R", "faultXOverR", f.FaultXOverR)).Close("td");
             page.Open("td", "class=\"status\"").Raw(Cells.Json("status", f.Status)).Raw(errors.Count > 0 ? $"<small>{string.Join(" ", errors)}</small>" : "").Close("td");
             page.Close("tr");
         }
 
         page.Close("tbody").Close("table");
         page.El("p", "Load is the running load at 100 % of each motor's full-load current plus the other loads; the required ampacity adds 25 % of the largest motor (430.24).", "class=\"note\"");
+        if (fault)
+            page.El("p", "Fault current is the three-phase bolted fault current at the feeder's bus from the source, by the ohmic (R + jX) method; \"with motors\" adds about 4 × the running motors' full-load current, an approximation; X/R is that of the impedance from the source. Each motor's controller is taken to stand at its feeder's bus.", "class=\"note\"");
         page.SheetEnd();
     }
 }

@@ -13,6 +13,7 @@ public readonly record struct Measure(decimal Value, string Unit)
     public const string Volts = "V";
     public const string Percent = "%";
     public const string Horsepower = "hp";
+    public const string KiloAmps = "kA";
 
     public static Measure Of(decimal value, string unit) => new(Normalize(value), unit);
 

@@ -103,6 +103,12 @@ public sealed record MotorData
     public Measure? BranchVoltageDrop { get; init; }
     /// <summary>Drop from the source through the feeders and this branch.</summary>
     public Measure? TotalVoltageDrop { get; init; }
+    /// <summary>Three-phase bolted fault current at the motor's controller (taken to stand at its feeder's bus) from the source alone (ohmic method, docs/checks.md); null when the list has no 'source' or it could not be worked out.</summary>
+    public Measure? FaultCurrent { get; init; }
+    /// <summary>The same plus the running motors' contribution (≈ 4 × FLC, an approximation): what ratings are checked against.</summary>
+    public Measure? FaultCurrentWithMotors { get; init; }
+    /// <summary>X/R of the impedance from the source to the controller; null where it has no resistance or nothing was worked out.</summary>
+    public decimal? FaultXOverR { get; init; }
     /// <summary>ok, warnings or errors: the worst finding on the motor's lines.</summary>
     public string Status { get; init; } = "ok";
     public IReadOnlyList<RowFinding> Findings { get; init; } = [];
@@ -143,6 +149,12 @@ public sealed record FeederData
     public Measure? VoltageDrop { get; init; }
     /// <summary>Drop from the source to this feeder's load end.</summary>
     public Measure? TotalVoltageDrop { get; init; }
+    /// <summary>Three-phase bolted fault current at the feeder's bus (its load end) from the source alone (ohmic method, docs/checks.md); null when the list has no 'source' or it could not be worked out.</summary>
+    public Measure? FaultCurrent { get; init; }
+    /// <summary>The same plus the running motors' contribution (≈ 4 × FLC, an approximation): what ratings are checked against.</summary>
+    public Measure? FaultCurrentWithMotors { get; init; }
+    /// <summary>X/R of the impedance from the source to the bus; null where it has no resistance or nothing was worked out.</summary>
+    public decimal? FaultXOverR { get; init; }
     public bool SuppliesFirePump { get; init; }
     public string Status { get; init; } = "ok";
     public IReadOnlyList<RowFinding> Findings { get; init; } = [];

@@ -100,6 +100,9 @@ public static class ScheduleDataBuilder
             Length = Own(n => n.Length) is { } l ? Measure.Written(l) : null,
             BranchVoltageDrop = Measure.Of(Value(m.BranchDrop, "branchVoltageDrop", missing)?.Percent, Measure.Percent),
             TotalVoltageDrop = Measure.Of(m.TotalDropPercent, Measure.Percent),
+            FaultCurrent = Fault(power, power.AtController(node), missing, p => p.Bolted),
+            FaultCurrentWithMotors = Fault(power, power.AtController(node), null, p => p.WithMotors),
+            FaultXOverR = XOverR(power.AtController(node)),
             Status = Status(findings),
             Findings = findings,
             NotComputed = missing,
@@ -142,6 +145,9 @@ public static class ScheduleDataBuilder
             Length = node.Length is { } l ? Measure.Written(l.Value) : null,
             VoltageDrop = Measure.Of(Value(f.Drop, "voltageDrop", missing)?.Percent, Measure.Percent),
             TotalVoltageDrop = Measure.Of(f.CumulativeDropPercent, Measure.Percent),
+            FaultCurrent = Fault(power, power.Feeders.GetValueOrDefault(node)?.Bus, missing, p => p.Bolted),
+            FaultCurrentWithMotors = Fault(power, power.Feeders.GetValueOrDefault(node)?.Bus, null, p => p.WithMotors),
+            FaultXOverR = XOverR(power.Feeders.GetValueOrDefault(node)?.Bus),
             SuppliesFirePump = f.SuppliesFirePump,
             Status = Status(findings),
             Findings = findings,
@@ -150,6 +156,21 @@ public static class ScheduleDataBuilder
             NotChecked = NotCheckedNote.Of(Coverage.NotChecked.For(f, power)),
         };
     }
+
+    /// <summary>
+    /// A fault current in kA at a point. Only a list with a 'source' asks for one, so only then is a
+    /// value that could not be worked out noted with its reason (under "faultCurrent").
+    /// </summary>
+    private static Measure? Fault(Power.FaultStudy power, Power.FaultPoint? at, List<NotComputed>? missing, Func<Power.FaultPoint, Result<decimal>> value)
+    {
+        if (!power.HasSource || at is null) return null;
+        var r = value(at);
+        if (r.Value is { } amps) return Measure.Of(amps / 1000m, Measure.KiloAmps);
+        if (missing is not null && r.Unavailable is { } why) missing.Add(new NotComputed("faultCurrent", why));
+        return null;
+    }
+
+    private static decimal? XOverR(Power.FaultPoint? at) => at?.XOverR is { } k ? decimal.Round(k, 4) : null;
 
     /// <summary>A result's value; when it was attempted but could not be worked out, its reason is noted under the field's name.</summary>
     private static T? Value<T>(Result<T>? r, string field, List<NotComputed> missing) where T : struct
