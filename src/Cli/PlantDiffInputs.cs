@@ -16,6 +16,10 @@ internal sealed class PlantDiffInputs : IDisposable
 {
     private readonly List<TempFolder> _temps = [];
     private readonly Dictionary<string, string> _revisions = new(StringComparer.Ordinal);
+    private readonly string _repository;
+
+    /// <param name="repository">A folder in the repository whose revisions are read (the current folder for `diff`).</param>
+    public PlantDiffInputs(string repository = ".") => _repository = repository;
 
     public void Dispose()
     {
@@ -70,7 +74,7 @@ internal sealed class PlantDiffInputs : IDisposable
     private string Unpack(string revision)
     {
         if (_revisions.TryGetValue(revision, out var known)) return known;
-        var repository = Git.Text(".", "rev-parse", "--show-toplevel");
+        var repository = Git.Text(_repository, "rev-parse", "--show-toplevel");
         var temp = TempFolder.Create("motorlang-revision-");
         _temps.Add(temp);
         // The top of the copy stops the upward search for a plant file, as the repository's does.

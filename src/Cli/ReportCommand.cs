@@ -43,7 +43,7 @@ public static class ReportCommand
             if (result.GetValue(date) is { } day && !DateOnly.TryParseExact(day, "yyyy-MM-dd", out issuedOn))
                 throw new CliException($"--date '{day}' is not a date written yyyy-MM-dd");
             if (given != "-" && PlantOf(given, stderr) is { } plant)
-                return WritePlant(plant, result.GetValue(name), issuedOn, result.GetValue(output), stdout, verb, write);
+                return WritePlant(plant, result.GetValue(name), issuedOn, verb == "report" ? result.GetValue(revisions) : 0, result.GetValue(output), stdout, verb, write);
             var inputs = Inputs.Resolve([given], result.GetValue(stdinName), env, stderr);
             var text = inputs.Read(inputs.Names[0]);
             var listName = result.GetValue(name) ?? inputs.Names[0];
@@ -79,7 +79,7 @@ public static class ReportCommand
     }
 
     /// <summary>The report or diagram of a whole plant: its files analysed as one, every place named by its own file and line.</summary>
-    private static int WritePlant(Files.PlantFolder plant, string? name, DateOnly issued, string? target, TextWriter stdout, string verb,
+    private static int WritePlant(Files.PlantFolder plant, string? name, DateOnly issued, int revisions, string? target, TextWriter stdout, string verb,
         Func<AnalysisResult, string, DateOnly, IReadOnlyList<Revision>?, string> write)
     {
         var analysis = PlantInputs.Analyze(plant);
@@ -87,9 +87,15 @@ public static class ReportCommand
             throw new CliException($"a file of the plant in '{PlantInputs.Shown(plant.Root)}' could not be read into it, so its {verb} would leave circuits out; 'motorlang check' names the file");
         var shown = plant.Members.ToDictionary(m => m.Name, m => PlantInputs.Shown(m.Path));
         var lines = SourceLines.Plant(line => analysis.FileOfLine(line) is var (f, l) ? (shown.GetValueOrDefault(f, f), l) : default);
+        IReadOnlyList<Revision>? log = null;
+        if (revisions > 0)
+        {
+            var (revised, before) = RevisionHistory.OfPlant(plant, analysis, revisions);
+            log = RevisionLog.OfPlant(revised, before);
+        }
+
         var content = verb == "report"
-            // A plant's revision log (a semantic diff of the whole plant per commit) is not written yet; the sheet says there is none.
-            ? PlantReport.Html(joined, new ReportInfo(name ?? PlantInputs.Shown(plant.Root), Version, issued) { Lines = lines })
+            ? PlantReport.Html(joined, new ReportInfo(name ?? PlantInputs.Shown(plant.Root), Version, issued, log) { Lines = lines })
             : write(joined, name ?? PlantInputs.Shown(plant.Root), issued, null);
         if (target is not null) SourceFiles.WriteOutput(target, System.Text.Encoding.UTF8.GetBytes(content));
         else stdout.Write(content);

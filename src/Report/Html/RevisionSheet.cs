@@ -13,14 +13,14 @@ public static class RevisionSheet
         page.SheetStart("revisions", "Revision log", block);
         if (revisions is null || revisions.Count == 0)
         {
-            page.El("p", "No revision log: the motor list is not kept in a git repository here, or has no commits yet, or the log was not asked for (--revisions 0), or the report is of a plant of several files (not written for plants yet). "
+            page.El("p", "No revision log: the motor list is not kept in a git repository here, or has no commits yet, or the log was not asked for (--revisions 0). "
                 + "The title block's revision is as written in the list.", "class=\"lead\"");
             page.SheetEnd();
             return;
         }
 
-        page.El("p", "Newest first. Each revision lists what changed in the motor list since the one below it, by tag: written values, "
-            + "sizes that moved and findings that appeared or were resolved.", "class=\"lead\"");
+        page.El("p", "Newest first. Each revision lists what changed since the one below it, by tag: written values, "
+            + "sizes that moved and findings that appeared or were resolved (in a plant, each led by its file, with files added and removed).", "class=\"lead\"");
         page.Open("table", "class=\"revisions\"").Open("thead").Open("tr");
         foreach (var h in new[] { "Revision", "Date", "Author", "Reason", "Changes" }) page.El("th", h);
         page.Close("tr").Close("thead").Open("tbody");
@@ -28,12 +28,12 @@ public static class RevisionSheet
         {
             page.Open("tr", $"class=\"revision\" {Page.A("data-commit", r.Commit ?? "work-tree")}")
                 .El("td", r.Commit ?? "work tree", "class=\"code\"").El("td", r.Date).El("td", r.Author).El("td", r.Subject).Open("td");
-            if (r.Changes is null) page.Text("first revision of the list");
+            if (r.Changes is null) page.Text("first revision (nothing before it to compare with)");
             else if (r.Changes.Count == 0) page.Text("no change to any feeder, motor or load (project settings, comments or layout)");
             else
             {
                 page.Open("ul", "class=\"changes\"");
-                foreach (var c in r.Changes) page.El("li", ListDiff.Describe(c));
+                foreach (var c in r.Changes) page.El("li", c);
                 page.Close("ul");
             }
 
