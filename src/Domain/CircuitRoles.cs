@@ -14,3 +14,12 @@ public enum CapacitorPosition { LoadSide, LineSide }
 
 /// <summary>Where the overload relay of a wye-start, delta-run motor sits: in the motor leads (the delta circuit) or in the line conductors.</summary>
 public enum OverloadLocation { DeltaLeads, LineLeads }
+
+/// <summary>Whether a motor control circuit's conductors stay within the motor control equipment enclosure (Table 430.72(B) Column B) or leave it (Column C).</summary>
+public enum ControlRoute { WithinEnclosure, LeavesEnclosure }
+
+/// <summary>How a motor of 1 hp or less is installed, for 430.32(D): permanently, or not (portable).</summary>
+public enum Installation { Portable }
+
+/// <summary>Whether a manually started motor is within sight from its controller (430.32(D)(2)).</summary>
+public enum SightOfController { WithinSight }

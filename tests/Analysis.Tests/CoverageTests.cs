@@ -29,7 +29,8 @@ public class CoverageTests
         Assert.All(driveItems, i => Assert.DoesNotContain(i, plain));
         // Both are motors: the short-circuit current rating (110.10, 409.22, 430.8) and control circuits (430.72) concern each.
         Assert.Contains("110.10, 409.22, 430.8", plain);
-        Assert.Contains("430.72–430.75", drive);
+        Assert.Contains("430.73–430.75", drive);
+        Assert.Contains("430.72", drive);
         Assert.DoesNotContain("430.28, 240.21(B)", plain);
     }
 
@@ -41,7 +42,8 @@ public class CoverageTests
         Assert.Contains("430.28, 240.21(B)", feeder);
         Assert.Contains("450.3", feeder);
         Assert.Contains("110.9", feeder);
-        Assert.DoesNotContain("430.72–430.75", feeder);
+        Assert.DoesNotContain("430.73–430.75", feeder);
+        Assert.DoesNotContain("430.72", feeder);
         Assert.DoesNotContain("430.126", feeder);
     }
 

@@ -31,6 +31,12 @@ public class ExampleScheduleTests
         Assert.Equal("3 AWG", pr.MinimumLeads!.Value.ToString());
         Assert.Equal(85.16m, decimal.Round(pr.OverloadLimit!.Value!.Value, 2));
         Assert.Equal(("2/0 AWG; leads 3 AWG", "2/0 AWG; leads 3 AWG"), (Row(a, "PR-301").MinimumWire, Row(a, "PR-301").Wire));
+        // Its control transformer (430.72(C)): 250 VA / 480 V = 0.5208 A primary; 250 / 120 = 2.083 A secondary, whose 3 A
+        // fuse is within 167 % (3.48 A, Table 450.3(B)), so the primary may be 250 % = 1.30 A, or under 2 A 500 % = 2.60 A
+        // (430.72(C)(4)): 2.60 A. The 3 A secondary fuse protects 14 AWG copper (Column A, 15 A, Table 430.72(B)).
+        Assert.Equal(2.6m, decimal.Round(pr.ControlPrimaryLimit!.Value!.Value, 2));
+        Assert.Equal(15m, pr.ControlConductorLimit!.Value);
+        Assert.Equal(3, pr.OverloadUnitsRequired!.Value);
 
         // TC-302, 30 hp 460 V (40 A) on a 36 A drive with a bypass: 430.122(C) max(45, 50) = 50 A -> 8 AWG (50 A).
         // Output conductors 430.122(B) 125 % x 40 = 50 A: the branch 8 AWG. Breaker: 430.52 250 % x 40 = 100 A, marked 60 A.

@@ -41,6 +41,12 @@ public enum Reach
     TransformerNotChecked,
     /// <summary>Motors with a power-factor capacitor written (<c>capacitor</c>, Article 460).</summary>
     Capacitor,
+    /// <summary>Motors and motor-compressors whose control circuit was not checked (no <c>control-wire</c> or <c>control-transformer</c>, a compressor, a fire pump).</summary>
+    NoControlCheck,
+    /// <summary>Motors with a control transformer (<c>control-transformer</c>).</summary>
+    ControlTransformer,
+    /// <summary>Motors whose number of overload units is not written (<c>overload-units</c>).</summary>
+    NoOverloadUnits,
 }
 
 /// <summary>A rule that bears on a circuit but that MotorLang does not check: the rule, what it covers (one line), and why it is left out.</summary>
@@ -69,8 +75,12 @@ public static class NotChecked
             "the list does not say where the wiring runs", Reach.EveryCircuit),
         new("Articles 500–516", "equipment and wiring in hazardous (classified) locations",
             "the list does not say where the equipment is", Reach.EveryCircuit),
-        new("430.72–430.75", "motor control circuits (their conductors, protection and disconnection)",
-            "control wiring is not part of the list", Reach.EveryMotor),
+        new("430.72", "motor control circuit conductors and their protection, and a control transformer's protection",
+            "no 'control-wire' or 'control-transformer' is written (the control circuits of motor-compressors and fire pumps are not checked)", Reach.NoControlCheck),
+        new("430.73–430.75", "mechanical protection of control conductors, the control circuit's arrangement (grounding, 430.74) and its disconnection (430.75)",
+            "the list does not record how control wiring is run, grounded or disconnected", Reach.EveryMotor),
+        new("430.72(B)", "the conductors between the motor branch and the control transformer's primary",
+            "the list records the transformer's primary device, not its primary conductors", Reach.ControlTransformer),
         new("Article 440", "a hermetic refrigerant motor-compressor written as a 'motor'",
             "a 'motor' is sized under Article 430 from its horsepower; write 'compressor' for the Article 440 rules", Reach.Motor),
         new("440.51–440.55", "motor-compressor overload protection (Article 440 Part VI)",
@@ -87,8 +97,10 @@ public static class NotChecked
             "that needs the motor's acceleration and the devices' trip curves; MotorLang checks only the code limits", Reach.Motor),
         new("430.102", "where the disconnect is (in sight of the controller and of the motor)",
             "the list does not record where equipment is mounted", Reach.Motor),
-        new("430.37", "the number and placement of overload units",
-            "MotorLang checks an overload's rating, not how many units there are or which conductors they are in", Reach.Motor),
+        new("430.37", "the number of overload units",
+            "no 'overload-units' is written", Reach.NoOverloadUnits),
+        new("Table 430.37", "which conductors the overload units are in (for example the ungrounded conductor of a single-phase circuit)",
+            "the list does not say which conductors the units are in", Reach.Motor),
         new("430.126", "motor overtemperature protection when the drive runs the motor at reduced speed",
             "it depends on the drive's and the motor's own protection features, which the list does not carry", Reach.DriveFedMotor),
         new("430.130, 110.3(B)", "the branch device type the drive calls for, and its largest rating unless 'drive-max-protection' is written",
@@ -156,6 +168,9 @@ public static class NotChecked
         Reach.OverThousandVolts => Math.Max(motor.RatedVolts, motor.Volts) > SystemVoltages.LowVoltageLimit,
         Reach.FirePump => motor.FireService == FireServiceRole.FirePump,
         Reach.Capacitor => motor.HasCapacitor,
+        Reach.NoControlCheck => !motor.ControlCircuitChecked,
+        Reach.ControlTransformer => motor.HasControlTransformer,
+        Reach.NoOverloadUnits => !motor.IsCompressor && motor.OverloadUnitsRequired is null && motor.FireService != FireServiceRole.FirePump,
         _ => false,
     }).ToList();
     }
@@ -201,6 +216,9 @@ public static class NotChecked
         Reach.TransformerFeeder => "feeders with a `transformer`",
         Reach.TransformerNotChecked => "feeders with a `transformer` and no `primary-protection` (or over 1000 V)",
         Reach.Capacitor => "motors with a `capacitor`",
+        Reach.NoControlCheck => "motors with no `control-wire` or `control-transformer`, motor-compressors and fire pumps",
+        Reach.ControlTransformer => "motors with a `control-transformer`",
+        Reach.NoOverloadUnits => "motors with no `overload-units` (not motor-compressors or fire pumps)",
         _ => "every feeder",
     };
 }

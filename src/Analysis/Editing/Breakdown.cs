@@ -86,6 +86,10 @@ public static class Breakdown
         "capacitor" => heading is "Capacitor conductors" or "Overload",
         "capacitor-wire" => heading == "Capacitor conductors",
         "improved-current" => heading == "Overload",
+        "control-wire" or "control-protection" => heading is ControlConductors or ControlTransformer,
+        "control-transformer" or "control-primary-protection" => heading is ControlTransformer or ControlConductors,
+        "overload-units" => heading == OverloadUnitsHeading,
+        "manual-start" => heading == "Overload",
         "motor-leads" => heading == "Branch conductors",
         "drive-bypass" => heading == "Branch conductors",
         "drive-max-protection" => heading == "Short-circuit and ground-fault protection",
@@ -145,13 +149,26 @@ public static class Breakdown
                 m.Overload is { } written ? $"✗ an overload of {Format.Amps(written)} is written" : "✓ none written");
         if (m.OverloadLimit is { } ol)
             yield return new BreakdownSection("Overload", ol.Steps.Concat(m.OverloadAbsoluteLimit?.Steps.Skip(1) ?? []).Concat(m.NoOverloadRequired?.Steps ?? []).ToList(),
-                ol.Unavailable ?? Compare(m.Overload, ol.Value, "setting", atMost: true));
+                ol.Unavailable ?? (m.Overload is null && m.NoOverloadRequired is not null
+                    ? "✓ none written; the branch device may serve (430.32(D)(2)(a))"
+                    : Compare(m.Overload, ol.Value, "setting", atMost: true)));
+        if (m.OverloadUnitsRequired is { Value: { } unitsNeeded } units && m.OverloadUnits is { } unitsWritten)
+            yield return new BreakdownSection(OverloadUnitsHeading, units.Steps,
+                unitsWritten >= unitsNeeded ? $"✓ {unitsWritten} written, at least {unitsNeeded}" : $"✗ {unitsWritten} written; {unitsNeeded} required");
         if (m.CapacitorRatedCurrent is { } cap)
             yield return new BreakdownSection("Capacitor conductors",
                 cap.Steps.Concat(m.CapacitorRequiredAmpacity?.Steps ?? []).Concat(m.MinimumCapacitorWire?.Steps ?? []).ToList(),
                 cap.Unavailable ?? (m.CapacitorWire is { } cw && m.CapacitorWireAmpacity?.Value is { } ca && m.CapacitorRequiredAmpacity?.Value is { } cr
                     ? (ca >= cr ? $"✓ {cw} carries {Format.Amps(ca)} ≥ {Format.Amps(cr)}" : $"✗ {cw} carries only {Format.Amps(ca)}; {Format.Amps(cr)} is required")
                     : null));
+        if (m.ControlConductorLimit is { } control)
+            yield return new BreakdownSection(ControlConductors, control.Steps,
+                control.Unavailable ?? (m.ControlConductorDevice is { } device && control.Value is { } most
+                    ? (device <= most ? $"✓ {Format.Amps(device)} protects them, within {Format.Amps(most)}" : $"✗ {Format.Amps(device)} protects them; at most {Format.Amps(most)}")
+                    : null));
+        if (m.ControlPrimaryLimit is { } primary)
+            yield return new BreakdownSection(ControlTransformer, primary.Steps.Concat(m.ControlSecondaryLimit?.Steps ?? []).ToList(),
+                Compare(m.ControlPrimaryDevice, primary.Value, "primary device", atMost: true) ?? "no primary device written");
         if (m.MinimumGround is { } g)
             yield return new BreakdownSection("Grounding conductor", g.Steps,
                 m.Ground is { } written && g.Value is { } min ? (written >= min ? $"✓ {written} ≥ {min}" : $"✗ {written} is smaller than {min}") : null);
@@ -194,6 +211,12 @@ public static class Breakdown
     }
 
     private const string FirePumpVoltageHeading = "Fire pump voltage (NEC 695.7)";
+
+    private const string ControlConductors = "Control conductors";
+
+    private const string ControlTransformer = "Control transformer";
+
+    private const string OverloadUnitsHeading = "Overload units";
 
     private const string CompressorCurrent = "Motor-compressor current";
 

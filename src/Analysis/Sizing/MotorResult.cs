@@ -138,6 +138,31 @@ public sealed class MotorResult(MotorNode motor)
     /// <summary>The current the overload is selected from when it is not the nameplate (460.9, with a load-side capacitor).</summary>
     public Result<decimal>? OverloadBasis { get; internal set; }
 
+    /// <summary>A motor control circuit was checked on this motor (430.72): a 'control-wire' or a 'control-transformer' is written.</summary>
+    public bool ControlCircuitChecked { get; internal set; }
+
+    /// <summary>A control circuit transformer is written on this motor (430.72(C)).</summary>
+    public bool HasControlTransformer { get; internal set; }
+
+    /// <summary>The largest device Table 430.72(B) permits on the control conductors (the column that applies, or 430.72(B) Exception No. 2 through the transformer).</summary>
+    public Result<decimal>? ControlConductorLimit { get; internal set; }
+
+    /// <summary>The written device the control conductors were compared with: the control circuit's own, the motor branch device, or the transformer's primary device.</summary>
+    public decimal? ControlConductorDevice { get; internal set; }
+
+    /// <summary>The largest primary device 430.72(C) permits on the control transformer.</summary>
+    public Result<decimal>? ControlPrimaryLimit { get; internal set; }
+
+    /// <summary>The control transformer's primary device as written.</summary>
+    public decimal? ControlPrimaryDevice { get; internal set; }
+
+    /// <summary>The largest secondary device Table 450.3(B) permits with primary and secondary protection (430.72(C)(2)).</summary>
+    public Result<decimal>? ControlSecondaryLimit { get; internal set; }
+
+    /// <summary>The number of overload units Table 430.37 requires, when 'overload-units' is written.</summary>
+    public Result<int>? OverloadUnitsRequired { get; internal set; }
+    public int? OverloadUnits { get; internal set; }
+
     /// <summary>The current this motor adds to its feeder under 430.24 (its duty-cycle current when it has one).</summary>
     public decimal? DutyCycleAmps { get; internal set; }
 }

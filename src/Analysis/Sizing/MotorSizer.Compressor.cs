@@ -41,6 +41,12 @@ internal sealed partial class MotorSizer
         ["motor-leads"] = "the starting method of a motor-compressor is not modelled",
         ["drive-bypass"] = "drives on a motor-compressor are not modelled",
         ["drive-max-protection"] = "drives on a motor-compressor are not modelled",
+        ["overload-units"] = "motor-compressor overload protection (440 Part VI) is not checked by MotorLang",
+        ["manual-start"] = "motor-compressor overload protection (440 Part VI) is not checked by MotorLang",
+        ["control-wire"] = "a motor-compressor's control circuit (430.72) is not checked by MotorLang",
+        ["control-protection"] = "a motor-compressor's control circuit (430.72) is not checked by MotorLang",
+        ["control-transformer"] = "a motor-compressor's control circuit (430.72) is not checked by MotorLang",
+        ["control-primary-protection"] = "a motor-compressor's control circuit (430.72) is not checked by MotorLang",
     };
 
     private static readonly string[] CompressorOnly = ["rated-load", "selection-current", "min-ampacity", "max-protection"];

@@ -118,6 +118,8 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         else
             CheckOverload(motor, r, starting);
         CheckCapacitor(motor, r, settings);
+        CheckControlCircuit(motor, r, settings);
+        CheckOverloadUnits(motor, r);
         CheckDisconnectAndController(motor, r, flc, power.Value, starting, driveInput);
         CheckGround(motor, r, protectionFlc, phases, kind, design, efficiency, settings);
         LockedRotor(motor, r, phases, design);
@@ -325,6 +327,8 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         decimal? rise = riseQuantity is { } q ? (q.Unit == Unit.Fahrenheit ? q.Value * 5m / 9m : q.Value) : null;
         r.OverloadLimit = cache.Overload(nameplate, sf, rise, absolute: false);
         r.OverloadAbsoluteLimit = cache.Overload(nameplate, sf, rise, absolute: true);
+        // 430.32(B), (D): motors of 1 hp or less have the same percentages under rules of their own.
+        var (running, smallMotorExempt) = SmallMotorOverload(motor, r);
         // 460.9: with a capacitor on its load side, the overload is selected from the improved-power-factor current.
         if (CapacitorOverloadBasis(motor, r, nameplate) is { } basis)
         {
@@ -360,10 +364,16 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
             // 430.33: a duty-cycle motor is protected against overload by its branch device.
             if (Get(motor, m => m.Duty) is { Value: not DutyKind.Continuous }) return;
             if (DriveProvidesOverload(motor, r, starting)) return;
+            if (smallMotorExempt is not null)
+            {
+                r.NoOverloadRequired = smallMotorExempt;
+                return;
+            }
+
             if (r.OverloadLimit.Value is { } limit)
                 Add(FindingCodes.OverloadMissing, Severity.Warning, motor.Header.KeywordToken.Range,
-                    $"no overload given; NEC {(windings is null ? "430.32(A)(1)" : "430.32(A)(1) and 430.4")} requires one, rated at most {Format.Amps(limit)}{where}",
-                    Insert(motor, $"overload {Format.Number(RoundDown(limit))}A{(windings is null ? "" : windings == WindingScope.PerWinding ? " per-winding" : "")}{(inDeltaLeads ? " delta-leads" : "")}", "Add the overload at its 430.32(A)(1) limit"));
+                    $"no overload given; NEC {(windings is null ? running : $"{running} and 430.4")} requires one, rated at most {Format.Amps(limit)}{where}",
+                    Insert(motor, $"overload {Format.Number(RoundDown(limit))}A{(windings is null ? "" : windings == WindingScope.PerWinding ? " per-winding" : "")}{(inDeltaLeads ? " delta-leads" : "")}", $"Add the overload at its {running} limit"));
             else if (r.OverloadBasis is { Unavailable: { } needsImproved })
                 Add(FindingCodes.CapacitorOverloadBasis, Severity.Warning, motor.Header.KeywordToken.Range,
                     $"no overload given, and none can be proposed: {needsImproved}");
@@ -390,11 +400,11 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         var value = overload.Value.Value;
         if (value > absolute)
             Add(FindingCodes.OverloadTooLarge, Severity.Error, RangeOn(motor, owner, overload.Range),
-                $"overload {Format.Amps(value)} is above even the NEC 430.32(C) maximum of {Format.Amps(absolute)}{where}; NEC 430.32(A)(1) allows {Format.Amps(max)}",
+                $"overload {Format.Amps(value)} is above even the NEC 430.32(C) maximum of {Format.Amps(absolute)}{where}; NEC {running} allows {Format.Amps(max)}",
                 ReplaceOrOverride(motor, owner, "overload", "setting", $"{Format.Number(RoundDown(max))}A", $"Change the overload to {Format.Amps(RoundDown(max))}"));
         else if (value > max)
             Add(FindingCodes.OverloadAboveRunningLimit, Severity.Warning, RangeOn(motor, owner, overload.Range),
-                $"overload {Format.Amps(value)} is above the NEC 430.32(A)(1) limit of {Format.Amps(max)}{where}; that is allowed only where the smaller device will not start the motor (430.32(C), up to {Format.Amps(absolute)})");
+                $"overload {Format.Amps(value)} is above the NEC {running} limit of {Format.Amps(max)}{where}; that is allowed only where the smaller device will not start the motor (430.32(C), up to {Format.Amps(absolute)})");
     }
 
     private void CheckDisconnectAndController(MotorNode motor, MotorResult r, decimal flc, Quantity power, StartingMethod starting, decimal? driveInput)

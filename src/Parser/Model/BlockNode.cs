@@ -249,6 +249,22 @@ public sealed class MotorNode(Statement header, FeederNode feeder) : CircuitNode
     public bool DriveBypass => Has("drive-bypass");
     /// <summary>The drive's marked or instructed maximum branch device rating (430.130(A)(2)).</summary>
     public Located<Quantity>? DriveMaximumProtection => Get<Quantity>("drive-max-protection", "current");
+    /// <summary>The motor control circuit (430.72): its conductors, their protection and a control transformer.</summary>
+    public Located<WireSpec>? ControlWire => Get<WireSpec>("control-wire", "size");
+    public Located<ConductorMaterial>? ControlWireMaterial => Get<ConductorMaterial>("control-wire", "material");
+    public Located<ControlRoute>? ControlRoute => Get<ControlRoute>("control-wire", "route");
+    public Located<Quantity>? ControlProtection => Get<Quantity>("control-protection", "rating");
+    public Statement? ControlTransformer => Statement("control-transformer");
+    public Located<Quantity>? ControlTransformerRating => Get<Quantity>("control-transformer", "rating");
+    public Located<Quantity>? ControlTransformerPrimary => Get<Quantity>("control-transformer", "primary");
+    public Located<Quantity>? ControlTransformerSecondary => Get<Quantity>("control-transformer", "secondary");
+    public Located<Quantity>? ControlPrimaryProtection => Get<Quantity>("control-primary-protection", "rating");
+    /// <summary>The number of overload units in the motor's overload device (430.37).</summary>
+    public Located<int>? OverloadUnits => Get<int>("overload-units", "count");
+    /// <summary>A motor of 1 hp or less started by hand (430.32(D)), with how it is installed and seen.</summary>
+    public Located<bool>? ManualStart => Has("manual-start") ? new Located<bool>(true, Statement("manual-start")!.Range) : null;
+    public bool Portable => Get<Installation>("manual-start", "installation") is not null;
+    public bool WithinSight => Get<SightOfController>("manual-start", "sight") is not null;
     public Located<bool>? DriveOverload => Has("drive-overload") ? new Located<bool>(true, Statement("drive-overload")!.Range) : null;
 }
 

@@ -144,6 +144,22 @@ public static class Keywords
         new("line-leads", OverloadLocation.LineLeads, "a wye-delta motor's overload sits in the line conductors ahead of the wye-delta contactors"),
     ];
 
+    public static readonly WordChoice[] ControlRoutes =
+    [
+        new("leaves-enclosure", ControlRoute.LeavesEnclosure, "the control conductors extend beyond the motor control equipment enclosure (Table 430.72(B) Column C); the default, the stricter case"),
+        new("in-enclosure", ControlRoute.WithinEnclosure, "the control conductors stay within the motor control equipment enclosure (Table 430.72(B) Column B)"),
+    ];
+
+    public static readonly WordChoice[] Installations =
+    [
+        new("portable", Installation.Portable, "not permanently installed (430.32(D)(2))"),
+    ];
+
+    public static readonly WordChoice[] Sights =
+    [
+        new("within-sight", SightOfController.WithinSight, "within sight from the controller location (430.32(D)(2)(a))"),
+    ];
+
     public static readonly WordChoice[] LoadDuties =
     [
         new("continuous", true, "runs three hours or more at a time: counted at 125 %"),
@@ -284,6 +300,21 @@ public static class Keywords
             "The drive has a bypass device: the line conductors carry the larger of the drive's input and the motor's current (430.122(C))."),
         new("drive-max-protection", [Motor], null, [new("current", Current, true, Check: Positive)],
             "The largest branch short-circuit and ground-fault device the drive's instructions or marking permit (430.130(A)(2)): never exceeded."),
+        new("control-wire", [Motor], null,
+            [new("size", Wire, true), new("material", Word, false, Materials), new("route", Word, false, ControlRoutes)],
+            "The motor control circuit's conductors (430.72): size, material (the block's conductor material when not written), and whether they leave the control enclosure."),
+        new("control-protection", [Motor], null, [new("rating", Current, true, Check: Positive)],
+            "The overcurrent device in the control circuit that protects its conductors (the control transformer's secondary device where there is one): Table 430.72(B) Column A."),
+        new("control-transformer", [Motor], null,
+            [new("rating", VoltAmperes, true, Check: Positive), new("primary", Voltage, true, Check: Positive), new("secondary", Voltage, true, Check: Positive)],
+            "A control circuit transformer: its rating (VA) and primary and secondary voltages (430.72(C))."),
+        new("control-primary-protection", [Motor], null, [new("rating", Current, true, Check: Positive)],
+            "The control transformer's primary overcurrent device (430.72(C))."),
+        new("overload-units", [Motor], null, [new("count", Integer, true, Check: v => v is >= 1 and <= 6 ? null : "must be between 1 and 6")],
+            "The number of overload units (sensing elements, trip coils or heaters) the motor's overload device has (430.37)."),
+        new("manual-start", [Motor], null,
+            [new("installation", Word, false, Installations), new("sight", Word, false, Sights)],
+            "A motor of 1 hp or less that is started by hand (430.32(D)); portable if not permanently installed, within-sight if within sight from the controller."),
         new("hard-start", [Motor], null, [],
             "The motor will not start on the Table 430.52(C)(1) rating: allow the 430.52(C)(1)(b) maximums."),
     ];

@@ -4,7 +4,7 @@ namespace MotorLang.Parser.Statements;
 public enum BlockKind { Root, Project, Feeder, Motor, Load }
 
 /// <summary>What an argument position accepts.</summary>
-public enum ArgKind { Tag, Text, Power, Voltage, Phases, Current, Length, Temperature, Percent, Number, Integer, Wire, Word, Duration, ApparentPower, TradeSize, FaultCurrent, Ratio, ReactivePower }
+public enum ArgKind { Tag, Text, Power, Voltage, Phases, Current, Length, Temperature, Percent, Number, Integer, Wire, Word, Duration, ApparentPower, TradeSize, FaultCurrent, Ratio, ReactivePower, VoltAmperes }
 
 /// <summary>One accepted word for an enumerated argument: how the formatter writes it, what it means, and other spellings.</summary>
 public sealed record WordChoice(string Canonical, object Value, string Doc, params string[] Aliases)

@@ -461,7 +461,8 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         Unit.Foot or Unit.Metre => kind == ArgKind.Length,
         Unit.Celsius or Unit.Fahrenheit => kind == ArgKind.Temperature,
         Unit.Percent => kind == ArgKind.Percent,
-        Unit.Kva => kind == ArgKind.ApparentPower,
+        Unit.Kva => kind is ArgKind.ApparentPower or ArgKind.VoltAmperes,
+        Unit.Va => kind == ArgKind.VoltAmperes,
         Unit.Kvar => kind == ArgKind.ReactivePower,
         Unit.Minute => kind == ArgKind.Duration,
         Unit.Phase => kind == ArgKind.Phases,
@@ -498,6 +499,7 @@ internal sealed class StatementParser(ValueReader reader, List<Diagnostic> diagn
         ArgKind.FaultCurrent => $"a {a.Name} in kA (e.g. 42kA)",
         ArgKind.Ratio => "an X/R ratio (e.g. x/r 8)",
         ArgKind.ReactivePower => "a reactive power (e.g. 10kvar)",
+        ArgKind.VoltAmperes => "a rating in VA or kVA (e.g. 150VA)",
         _ => a.Name,
     };
 

@@ -1,7 +1,7 @@
 namespace MotorLang.Parser.Values;
 
 /// <summary>The units the format knows, each with the one spelling the formatter writes.</summary>
-public enum Unit { None, Hp, Kw, Volt, Amp, Foot, Metre, Celsius, Fahrenheit, Percent, Kva, Kvar, Minute, Phase, Awg, Kcmil, Inch, KiloAmp, XOverR }
+public enum Unit { None, Hp, Kw, Volt, Amp, Foot, Metre, Celsius, Fahrenheit, Percent, Kva, Kvar, Va, Minute, Phase, Awg, Kcmil, Inch, KiloAmp, XOverR }
 
 public static class Units
 {
@@ -9,7 +9,7 @@ public static class Units
     {
         ["hp"] = Unit.Hp, ["kw"] = Unit.Kw, ["v"] = Unit.Volt, ["a"] = Unit.Amp,
         ["ft"] = Unit.Foot, ["m"] = Unit.Metre, ["c"] = Unit.Celsius, ["°c"] = Unit.Celsius,
-        ["f"] = Unit.Fahrenheit, ["°f"] = Unit.Fahrenheit, ["%"] = Unit.Percent, ["kva"] = Unit.Kva, ["kvar"] = Unit.Kvar,
+        ["f"] = Unit.Fahrenheit, ["°f"] = Unit.Fahrenheit, ["%"] = Unit.Percent, ["kva"] = Unit.Kva, ["kvar"] = Unit.Kvar, ["va"] = Unit.Va,
         ["min"] = Unit.Minute, ["ph"] = Unit.Phase, ["awg"] = Unit.Awg, ["kcmil"] = Unit.Kcmil, ["mcm"] = Unit.Kcmil, ["in"] = Unit.Inch, ["ka"] = Unit.KiloAmp,
     };
 
@@ -33,7 +33,7 @@ public static class Units
     public static string Canonical(Unit unit) => unit switch
     {
         Unit.Hp => "hp", Unit.Kw => "kW", Unit.Volt => "V", Unit.Amp => "A", Unit.Foot => "ft", Unit.Metre => "m",
-        Unit.Celsius => "C", Unit.Fahrenheit => "F", Unit.Percent => "%", Unit.Kva => "kVA", Unit.Kvar => "kvar", Unit.Minute => "min",
+        Unit.Celsius => "C", Unit.Fahrenheit => "F", Unit.Percent => "%", Unit.Kva => "kVA", Unit.Kvar => "kvar", Unit.Va => "VA", Unit.Minute => "min",
         Unit.Phase => "ph", Unit.Awg => "AWG", Unit.Kcmil => "kcmil", Unit.Inch => "in", Unit.KiloAmp => "kA", Unit.XOverR => "x/r", _ => "",
     };
 
@@ -48,6 +48,7 @@ public static class Units
         Unit.Percent => "a percentage (%)",
         Unit.Kva => "an apparent power (kVA)",
         Unit.Kvar => "a reactive power (kvar)",
+        Unit.Va => "a transformer rating in volt-amperes (VA)",
         Unit.Minute => "a time rating (min)",
         Unit.Phase => "a phase count (1ph or 3ph)",
         Unit.Awg or Unit.Kcmil => "a wire size (AWG or kcmil)",

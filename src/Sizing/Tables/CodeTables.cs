@@ -29,12 +29,15 @@ public static class CodeTables
     public static CsvTable DcResistance { get; } = BySize("dc-resistance");
     public static CsvTable NemaStarters { get; } = Ascending("nema-starters", "amperes");
     public static CsvTable TransformerProtection { get; } = CsvTable.Load("transformer-protection");
+    public static CsvTable ControlCircuitProtection { get; } = CsvTable.Load("control-circuit-protection");
+    public static CsvTable OverloadUnits { get; } = CsvTable.Load("overload-units");
 
     public static IEnumerable<CsvTable> All =>
     [
         ThreePhaseFlc, SynchronousFlc, SinglePhaseFlc, DcFlc, SinglePhaseLockedRotor, PolyphaseLockedRotor, CodeLetters,
         Ampacity, AmbientCorrection, CccAdjustment, ProtectionPercent, StandardRatings, GroundingConductors, DutyCycle,
-        ConduitArea, ConductorArea, Impedance, DcResistance, NemaStarters, TransformerProtection,
+        ConduitArea, ConductorArea, Impedance, DcResistance, NemaStarters, TransformerProtection, ControlCircuitProtection,
+        OverloadUnits,
     ];
 
     private static CsvTable Ascending(string name, string key)

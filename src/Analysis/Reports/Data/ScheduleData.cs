@@ -79,6 +79,12 @@ public sealed record MotorData
     public Measure? CapacitorWireRequiredAmpacity { get; init; }
     public string? MinimumCapacitorWire { get; init; }
     public string? CapacitorWire { get; init; }
+    /// <summary>The largest device Table 430.72(B) permits on the motor control conductors (430.72(B)); null without a checked control circuit.</summary>
+    public Measure? ControlConductorLimit { get; init; }
+    /// <summary>The largest primary device 430.72(C) permits on the control transformer; null without one.</summary>
+    public Measure? ControlPrimaryLimit { get; init; }
+    /// <summary>The number of overload units Table 430.37 requires (430.37); null when 'overload-units' is not written.</summary>
+    public int? OverloadUnitsRequired { get; init; }
     /// <summary>The protective device, in the list's words (inverse-time-breaker, dual-element-fuse, ...).</summary>
     public string ProtectionDevice { get; init; } = "";
     /// <summary>Largest branch short-circuit and ground-fault device permitted (430.52); null for a fire pump.</summary>

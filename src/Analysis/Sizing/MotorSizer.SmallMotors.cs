@@ -1,0 +1,78 @@
+using MotorLang.Analysis.Findings;
+using MotorLang.Parser.Diagnostics;
+using MotorLang.Parser.Model;
+using MotorLang.Sizing;
+
+namespace MotorLang.Analysis.Sizing;
+
+/// <summary>
+/// Overloads of motors of 1 hp or less (430.32(B), (D)): the 430.32(A)(1) percentages under their
+/// own rules, and the one case where no separate overload is needed — manually started, not
+/// permanently installed and within sight from the controller (430.32(D)(2)(a)).
+/// </summary>
+internal sealed partial class MotorSizer
+{
+    private const string LargeMotorRule = "430.32(A)(1)";
+
+    /// <summary>
+    /// The rule that sets this motor's running overload limit, with its limits relabelled for a
+    /// small motor, and for the 430.32(D)(2)(a) case the reason no separate overload is required.
+    /// </summary>
+    private (string Rule, Result<bool>? Exempt) SmallMotorOverload(MotorNode motor, MotorResult r)
+    {
+        var manual = Get(motor, m => m.ManualStart, out var owner);
+        if (r.Horsepower > 1m)
+        {
+            if (manual is not null)
+                Add(FindingCodes.NotUsedHere, Severity.Warning, RangeOn(motor, owner, manual.Range),
+                    $"'manual-start' bears only on motors of 1 hp or less (NEC 430.32(D)); this motor is {Format.Number(r.Horsepower)} hp, so 430.32(A) applies and it is not used");
+            return (LargeMotorRule, null);
+        }
+
+        var portable = manual is not null && LikeFlag(motor, m => m.Portable);
+        var withinSight = manual is not null && LikeFlag(motor, m => m.WithinSight);
+        string rule;
+        string why;
+        if (manual is null)
+        {
+            rule = "430.32(B)(1)";
+            why = "1 hp or less, automatically started (no 'manual-start' written: the case that needs an overload device)";
+        }
+        else if (!portable)
+        {
+            rule = "430.32(D)(1), 430.32(B)(1)";
+            why = "1 hp or less, manually started and permanently installed: protected as 430.32(B) says";
+        }
+        else if (!withinSight)
+        {
+            rule = "430.32(D)(2)(b), 430.32(B)(1)";
+            why = "1 hp or less, manually started, not permanently installed and not within sight from the controller: protected as 430.32(B) says";
+        }
+        else
+        {
+            rule = "430.32(B)(1)";
+            why = "1 hp or less, manually started, not permanently installed and within sight from the controller";
+        }
+
+        var context = new Step("Motor of 1 hp or less", $"{Format.Number(r.Horsepower)} hp", $"NEC {rule}", why);
+        r.OverloadLimit = Relabel(r.OverloadLimit!, rule, context);
+        r.OverloadAbsoluteLimit = Relabel(r.OverloadAbsoluteLimit!, rule, null);
+        if (manual is null || !portable || !withinSight) return (rule, null);
+        var exempt = Result<bool>.Of(true, new Step("Separate overload", "not required", "NEC 430.32(D)(2)(a)",
+            "the branch short-circuit and ground-fault device may provide the overload protection, rated no larger than Article 430 Part IV (430.52) allows"));
+        return (rule, exempt);
+    }
+
+    /// <summary>A 'manual-start' word read along the like chain, from the motor whose 'manual-start' line is used.</summary>
+    private bool LikeFlag(MotorNode motor, Func<MotorNode, bool> flag)
+    {
+        Get(motor, m => m.ManualStart, out var owner);
+        return flag(owner ?? motor);
+    }
+
+    private static Result<decimal> Relabel(Result<decimal> limit, string rule, Step? first)
+    {
+        var steps = limit.Steps.Select(s => s.Rule == "NEC " + LargeMotorRule ? s with { Rule = "NEC " + rule } : s);
+        return new Result<decimal>(limit.Value, first is null ? [.. steps] : [first, .. steps], limit.Unavailable);
+    }
+}
