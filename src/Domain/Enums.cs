@@ -48,3 +48,14 @@ public enum CodeLetter { A, B, C, D, E, F, G, H, J, K, L, M, N, P, R, S, T, U, V
 
 /// <summary>What supplies the plant: a utility with a stated fault current, an infinite bus (no impedance ahead of the first transformer), or a generator.</summary>
 public enum SourceKind { Utility, InfiniteBus, Generator }
+
+/// <summary>Which 430.53 permission a branch circuit supplying several motors is installed under.</summary>
+public enum BranchGroupKind
+{
+    /// <summary>430.53(A): motors of 1 hp or less, each of 6 A or less, on a 120 V circuit at 20 A or less, or one of 1000 V or less at 15 A or less.</summary>
+    SmallMotors,
+    /// <summary>430.53(B): the branch device is no larger than 430.52 allows for the smallest motor.</summary>
+    SmallestProtected,
+    /// <summary>430.53(C): a group installation with controllers and overloads listed for it.</summary>
+    ListedGroup,
+}

@@ -100,7 +100,8 @@ internal static class LineReparser
         if (line.IndentWidth != old.IndentWidth || line.IndentHasTab || old.IndentHasTab) return null;
         var spec = oldStatement.Spec;
         if (line.Tokens[0].Kind != TokenKind.Word || Keywords.Find(line.Tokens[0].Text) != spec) return null;
-        if (spec.Keyword is "like" or "from") return null;
+        // An interlock ties motors together across the list (430.24 Exception No. 3), so it is re-read in full.
+        if (spec.Keyword is "like" or "from" or "interlock") return null;
 
         var model = previous.Model;
         if (model.BlockAt(old.Index) is not CircuitNode owner) return null;

@@ -58,6 +58,34 @@ public class ExampleScheduleTests
     }
 
     [Fact]
+    public void LaundryPlant()
+    {
+        var a = Example("laundry-plant.motors");
+        Assert.Empty(a.Findings);
+
+        // MCC-W, 430.24 Exception No. 3: HP-1A and HP-1B (30 hp, 40 A each, Table 430.250 460 V) never run together.
+        // Running: 125 % x 40 + FD-1 4.8 + CV-G's 14 + 7.6 + 7.6 = 84 A; all of them would be 124 A.
+        var mcc = a.Feeders.Values.Single(f => f.Tag == "MCC-W");
+        Assert.Equal(84m, mcc.RequiredAmpacity!.Value);
+        // 430.62(A) counts every motor: 100 A (HP-1A, 250 % x 40) + 40 + 4.8 + 29.2 = 174 -> 150 A.
+        Assert.Equal(150m, mcc.MaximumProtection!.Value);
+
+        // CV-G, 430.53(C)(4): 35 A (CV-1: 250 % x 14) + 7.6 + 7.6 = 50.2 A -> 50 A; 8 AWG at 75 C (50 A) is not above the sum.
+        // 430.110(C): 29.2 A -> 25 hp (34 A); locked-rotor 81 + 46 + 46 = 173 A -> 25 hp (183 A, Table 430.251(B)); 115 % = 33.58 A.
+        var group = a.Feeders.Values.Single(f => f.Tag == "CV-G");
+        Assert.Equal(50m, group.MaximumProtection!.Value);
+        Assert.Equal(25m, group.Disconnect!.Value!.Value.MinimumHorsepower);
+        Assert.Equal(33.58m, group.Disconnect.Value.Value.MinimumAmps);
+        // CV-2's 20 ft tap: one third of 50 A (430.53(D)(2)).
+        Assert.Equal(50m / 3m, a.Motors.Values.Single(m => m.Tag == "CV-2").TapAmpacity!.Value);
+
+        // BC-12, 430.53(A): 20 A at 120 V; 430.24: 125 % x 5.8 + 5.8 = 13.05 A (Table 430.248, 115 V column).
+        var fans = a.Feeders.Values.Single(f => f.Tag == "BC-12");
+        Assert.Equal(20m, fans.MaximumProtection!.Value);
+        Assert.Equal(13.05m, fans.RequiredAmpacity!.Value);
+    }
+
+    [Fact]
     public void DairyBottlingHall()
     {
         var a = Example("dairy-bottling.motors");

@@ -47,6 +47,10 @@ public enum Reach
     ControlTransformer,
     /// <summary>Motors whose number of overload units is not written (<c>overload-units</c>).</summary>
     NoOverloadUnits,
+    /// <summary>Branch circuits supplying several motors (a feeder block with <c>branch-group</c>), and the motors on them.</summary>
+    BranchGroup,
+    /// <summary>Feeders with a <c>demand-factor</c> (430.26).</summary>
+    DemandFactor,
 }
 
 /// <summary>A rule that bears on a circuit but that MotorLang does not check: the rule, what it covers (one line), and why it is left out.</summary>
@@ -107,8 +111,12 @@ public static class NotChecked
             "MotorLang holds no drive data; it checks the 430.52 limit and a written drive maximum", Reach.DriveFedMotor),
         new("430.131", "several motors supplied by one drive",
             "MotorLang sizes each motor as if it had its own drive", Reach.DriveFedMotor),
-        new("430.53, 430.55, 430.110(C)", "several motors on one branch circuit, and a disconnect serving a group",
-            "each motor is sized on its own branch circuit", Reach.Motor),
+        new("430.53(A)(2), 430.53(B), 430.53(C)(1)–(3)", "a circuit supplying several motors: the device marked on the controllers, that the device does not open in the most severe normal service, controllers and overloads listed for group installation (lettering from memory)",
+            "the list records no listings, markings or service conditions; the device limit of the permission written is checked", Reach.BranchGroup),
+        new("430.53(D)(2), 430.53(D)(3)", "a tap's protection from physical damage, and taps to a listed manual motor controller marked for tap conductor protection",
+            "the list does not say how a tap is run or what a controller is marked; taps are held to (D)(1), or (D)(2)'s one third when 25 ft or less", Reach.BranchGroup),
+        new("430.26", "that feeder conductors taken at a demand factor carry the maximum load of the motors' duties",
+            "the permission is the authority's; MotorLang applies the factor written and shows the permission", Reach.DemandFactor),
 
         new("210.19 IN No. 4, 215.2(A)(2) IN No. 2", "running voltage drop against the drop limit",
             "no 'length' is written (or no wire could be chosen), so there is nothing to work it out from", Reach.NoLength),
@@ -171,6 +179,7 @@ public static class NotChecked
         Reach.NoControlCheck => !motor.ControlCircuitChecked,
         Reach.ControlTransformer => motor.HasControlTransformer,
         Reach.NoOverloadUnits => !motor.IsCompressor && motor.OverloadUnitsRequired is null && motor.FireService != FireServiceRole.FirePump,
+        Reach.BranchGroup => motor.Motor.Feeder.BranchGroup is not null,
         _ => false,
     }).ToList();
     }
@@ -193,6 +202,8 @@ public static class NotChecked
         Reach.NoConduit => feeder.ConduitFillPercent is null,
         Reach.OverThousandVolts => feeder.Volts > SystemVoltages.LowVoltageLimit,
         Reach.FirePump => feeder.SuppliesFirePump,
+        Reach.BranchGroup => f.BranchGroup is not null,
+        Reach.DemandFactor => f.DemandFactor is not null,
         _ => false,
     }).ToList();
     }
@@ -219,6 +230,8 @@ public static class NotChecked
         Reach.NoControlCheck => "motors with no `control-wire` or `control-transformer`, motor-compressors and fire pumps",
         Reach.ControlTransformer => "motors with a `control-transformer`",
         Reach.NoOverloadUnits => "motors with no `overload-units` (not motor-compressors or fire pumps)",
+        Reach.BranchGroup => "circuits with `branch-group` and the motors on them",
+        Reach.DemandFactor => "feeders with a `demand-factor`",
         _ => "every feeder",
     };
 }

@@ -138,6 +138,10 @@ public static class Breakdown
                     : $"✗ {w} carries only {Format.Amps(allowable)}; {Format.Amps(needed)} is required");
         }
 
+        if (m.TapAmpacity is { Value: { } tap } taps)
+            yield return new BreakdownSection("Tap conductors", taps.Steps,
+                m.Wire is { } tw && m.WireAmpacity?.Value is { } ta ? (ta >= tap ? $"✓ {tw} carries {Format.Amps(ta)} ≥ {Format.Amps(tap)}" : $"✗ {tw} carries only {Format.Amps(ta)}; {Format.Amps(tap)} is required") : null);
+
         if (m.FirePumpMinimumProtection is { } fireMin)
             yield return new BreakdownSection("Short-circuit and ground-fault protection", fireMin.Steps,
                 fireMin.Unavailable ?? (m.FirePumpListedDevice ? "✓ listed for fire pump service; its curve was not checked" : Compare(m.ProtectionRating, fireMin.Value, "rating", atMost: false)));
@@ -204,7 +208,9 @@ public static class Breakdown
             yield return new BreakdownSection("Feeder protection", fireMin.Steps,
                 fireMin.Unavailable ?? (f.Feeder.ProtectionListed is not null ? "✓ listed for fire pump service; its curve was not checked" : Compare(f.ProtectionRating, fireMin.Value, "rating", atMost: false)));
         if (f.MaximumProtection is { } max)
-            yield return new BreakdownSection("Feeder protection", max.Steps, Compare(f.ProtectionRating, max.Value, "rating", atMost: true) ?? max.Unavailable);
+            yield return new BreakdownSection(f.BranchGroup is null ? "Feeder protection" : "Branch circuit protection (several motors)", max.Steps,
+                Compare(f.ProtectionRating, max.Value, "rating", atMost: true) ?? max.Unavailable);
+        if (f.Disconnect is { } d) yield return new BreakdownSection("Disconnecting means (several motors)", d.Steps, d.Unavailable);
         if (f.MinimumGround is { } g) yield return new BreakdownSection("Grounding conductor", g.Steps);
         if (f.Drop is { } vd)
             yield return new BreakdownSection("Voltage drop", vd.Steps, f.CumulativeDropPercent is { } c ? $"from the source: {c:0.##} %" : null);

@@ -35,6 +35,21 @@ internal sealed partial class FeederSizer
 
         /// <summary>The running totals; null when a motor has no full-load current.</summary>
         public FeederSummary? Totals;
+
+        /// <summary>The motors written with an 'interlock' (430.24 Exception No. 3), in breadth-first order (null when none).</summary>
+        public List<InterlockedMotor>? Interlocked;
+
+        /// <summary>The largest full-load current of a motor in no interlock.</summary>
+        public decimal FreeLargest;
+
+        /// <summary>A duty-cycle motor is carried (430.24 Exception No. 1): then Exception No. 3 is not applied, the conservative reading.</summary>
+        public bool DutyCycle;
+
+        /// <summary>Sum of the Table 430.251 locked-rotor currents (and other loads' currents) for a 430.110(C) disconnect; null when one is not known.</summary>
+        public decimal? LockedRotorAmps = 0m;
+
+        /// <summary>The first motor whose locked-rotor current is not known, and why.</summary>
+        public string? LockedRotorMissing;
     }
 
     private readonly Dictionary<(FeederNode Feeder, decimal Volts, Phases Phases, ProtectiveDevice Device), Carried> _carried = [];
@@ -116,6 +131,26 @@ internal sealed partial class FeederSizer
         return _carried[(top, volts, phases, device)];
     }
 
+    /// <summary>What the interlock and group-disconnect rules need of one motor the feeder carries.</summary>
+    private static void NoteRunning(Carried c, MotorResult m)
+    {
+        var flc = m.FullLoadCurrent.Value!.Value;
+        var count = Math.Max(1, m.Quantity);
+        c.DutyCycle |= m.DutyCycleAmps is not null;
+        // Read on the motor itself, never through 'like': a copied interlock would quietly take a motor out of the sum.
+        if (m.Motor.Interlock is { } name)
+            (c.Interlocked ??= []).Add(new InterlockedMotor(m.Tag, name.Value, m.Motor.InterlockSet?.Value.ToString(System.Globalization.CultureInfo.InvariantCulture) ?? "\u0000" + m.Tag, flc, count));
+        else
+            c.FreeLargest = Math.Max(c.FreeLargest, flc);
+        // 430.110(C)(1): each motor's locked-rotor current from Table 430.251(A)/(B) for its horsepower.
+        if (m.LockedRotorTableMaximum?.Value is { } lra) c.LockedRotorAmps += lra * count;
+        else
+        {
+            c.LockedRotorAmps = null;
+            c.LockedRotorMissing ??= $"{m.Tag}: {m.LockedRotorTableMaximum?.Unavailable ?? "no Table 430.251 locked-rotor current"}";
+        }
+    }
+
     private Carried Summarise(FeederNode f, List<FeederNode>? children, decimal volts, Phases phases, ProtectiveDevice device)
     {
         Steps += 1 + f.Motors.Count + f.Loads.Count;
@@ -136,6 +171,7 @@ internal sealed partial class FeederSizer
             if (c.Unsized is not null) continue;
             ownMotors.Add(AsFeederMotor(m, device));
             if (EquipmentLoad(m) is { } inside) equipment.Add(inside);
+            NoteRunning(c, m);
         }
 
         var ownLoads = new List<FeederLoad>(f.Loads.Count);
@@ -145,6 +181,8 @@ internal sealed partial class FeederSizer
             {
                 c.FirePump |= load.FireService?.Value == FireServiceRole.FirePump;
                 ownLoads.Add(l);
+                // 430.110(C)(1): other loads add their rated current to the locked-rotor sum.
+                c.LockedRotorAmps += l.Amps;
             }
             else
             {
@@ -192,6 +230,11 @@ internal sealed partial class FeederSizer
             }
 
             c.FirePump |= s.FirePump;
+            if (s.Interlocked is { } locked) (c.Interlocked ??= []).AddRange(locked);
+            c.FreeLargest = Math.Max(c.FreeLargest, s.FreeLargest);
+            c.DutyCycle |= s.DutyCycle;
+            c.LockedRotorAmps = c.LockedRotorAmps is { } lr && s.LockedRotorAmps is { } slr ? lr + slr : null;
+            c.LockedRotorMissing ??= s.LockedRotorMissing;
             if (s.Totals is { } t) below.Add(t);
             else complete = false;
         }

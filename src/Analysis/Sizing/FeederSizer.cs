@@ -77,7 +77,7 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
 
         var totals = carried.Totals!;
         r.CalculatedLoad = totals.RunningAmps + totals.LoadAmps;
-        r.RequiredAmpacity = WithCompressors(Feeders.RequiredAmpacity(totals), carried.Compressors, "NEC 440.33",
+        r.RequiredAmpacity = WithCompressors(Running(feeder, carried, totals, Feeders.RequiredAmpacity(totals)), carried.Compressors, "NEC 440.33",
             "counted as motors at the rated-load or branch-circuit selection current, the larger; marked equipment's other loads are its minimum circuit ampacity less 125 % of that current");
         var fuse = ShortCircuitProtection.IsFuse(device);
         // A fire pump supply's rules list every part they add up, so they take the list itself.
@@ -86,6 +86,8 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
         var governedBy695 = r.SuppliesFirePump && FirePumpAmpacity(r, parts);
         if (r.SuppliesFirePump)
             r.FirePumpMinimumProtection = FirePump.MinimumDevice(parts, fuse);
+        else if (feeder.BranchGroup is { } group)
+            r.BranchGroup = group.Value; // 430.53 replaces 430.62: its limit needs the conductors' ampacity, so it is worked out below
         else
             r.MaximumProtection = !ShortCircuitProtection.IsTableDevice(device) || device == ProtectiveDevice.InstantaneousTripBreaker
                 ? Result<decimal>.Missing(NotAFeederDevice(device))
@@ -97,12 +99,15 @@ internal sealed partial class FeederSizer(MotorList model, LayeredMap<MotorNode,
 
         CheckWire(feeder, r, required, settings, governedBy695);
         // 430.62(B): conductors larger than 430.24 requires may carry a device up to their ampacity.
-        if (r.MaximumProtection is { } partA)
+        if (r.MaximumProtection is { } partA && r.BranchGroup is null)
             r.MaximumProtection = FeederConductorProtection.Maximum(partA, r.WireAmpacity?.Value, required, fuse);
         if (r.SuppliesFirePump)
             CheckFirePumpProtection(feeder, r);
+        else if (r.BranchGroup is { } kind)
+            CheckGroup(feeder, r, kind, device, fuse);
         else
             CheckProtection(feeder, r);
+        CheckDisconnect(feeder, r, carried, totals);
         CheckGround(feeder, r, settings);
         CheckConduit(feeder, r, settings);
         Drop(r, settings);

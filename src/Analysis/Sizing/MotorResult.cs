@@ -36,6 +36,8 @@ public sealed class MotorResult(MotorNode motor)
     public Result<decimal> FullLoadCurrent { get; internal set; } = Result<decimal>.Missing("not computed");
     public Result<decimal>? RequiredAmpacity { get; internal set; }
     public Result<WireSpec>? MinimumWire { get; internal set; }
+    /// <summary>What the motor's conductors must carry as a tap from a circuit supplying several motors (430.53(D)).</summary>
+    public Result<decimal>? TapAmpacity { get; internal set; }
     public WireSpec? Wire { get; internal set; }
     public Result<decimal>? WireAmpacity { get; internal set; }
     /// <summary>For a 16 or 18 AWG branch wire: what 430.22(G) says about it (its ampacity is not read from Table 310.16).</summary>
@@ -213,6 +215,12 @@ public sealed class FeederResult(FeederNode feeder)
 
     /// <summary>What the feeder's drop is worked out from, for the fire pump checks that add other currents to it.</summary>
     internal DropBasis? DropBasis { get; set; }
+
+    /// <summary>The block is one branch circuit supplying several motors, under this 430.53 permission.</summary>
+    public BranchGroupKind? BranchGroup { get; internal set; }
+
+    /// <summary>A disconnect serving everything the feeder carries (430.110(C)), when one is written.</summary>
+    public Result<DisconnectRating>? Disconnect { get; internal set; }
 
     /// <summary>Drop from the source to this feeder's load end, through the feeders it is supplied from.</summary>
     public decimal? CumulativeDropPercent { get; internal set; }

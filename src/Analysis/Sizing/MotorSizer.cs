@@ -33,6 +33,7 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
     public MotorResult Size(MotorNode motor)
     {
         var r = new MotorResult(motor);
+        CheckInterlock(motor);
         if (motor.IsCompressor) return SizeCompressor(motor, r);
         WarnCompressorOnly(motor);
         var feeder = motor.Feeder;
@@ -95,6 +96,7 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         }
 
         CheckLeads(motor, r, flc, starting, conditions, designBcd);
+        CheckGroupTap(motor, r, conditions, designBcd);
 
         var protectionFlc = ProtectionCurrent(rating, flc);
         r.FireService = Get(motor, m => m.FireService)?.Value;
@@ -284,6 +286,12 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         // Written only when a finding needs it: most motors are correct, and this runs for each.
         string MaxText() => ShortCircuitProtection.IsSetting(r.Device) ? Format.Number(decimal.Floor(max)) + "A" : Format.Number(max) + "A";
 
+        if (device is null && IsGroupTap(motor))
+        {
+            GroupProtected(motor, r);
+            return;
+        }
+
         if (device is null)
         {
             Add(FindingCodes.NotWritten, Severity.Information, motor.Header.KeywordToken.Range,
@@ -310,7 +318,7 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
                 ReplaceOrOverride(motor, ratingOwner, "protection", "rating", MaxText(), $"Change the {unit} to {MaxText()}",
                     overrideText: $"protection {Keywords.Devices.First(d => Equals(d.Value, r.Device)).Canonical} {MaxText()}{windingWord}"));
         }
-        else if (value < flc * 1.25m && windings is null)
+        else if (value < flc * 1.25m && windings is null && Get(motor, m => m.ProtectionCombinedOverload) is null)
         {
             // Common practice, no source: below 125 % of full-load current a motor device opens on normal starting.
             Add(FindingCodes.ProtectionMayTrip, Severity.Warning, RangeOn(motor, ratingOwner, rating.Range),
@@ -364,6 +372,7 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
             // 430.33: a duty-cycle motor is protected against overload by its branch device.
             if (Get(motor, m => m.Duty) is { Value: not DutyKind.Continuous }) return;
             if (DriveProvidesOverload(motor, r, starting)) return;
+            if (CombinedDeviceIsOverload(motor, r)) return;
             if (smallMotorExempt is not null)
             {
                 r.NoOverloadRequired = smallMotorExempt;
@@ -471,7 +480,17 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         // minimum: the grounding conductor is sized for that corrected wire, so check and size give
         // the same number (and 250.122(A) never caps it at a wire that has to be replaced).
         var phase = WireToBeReplaced(r) && phaseMinimum is { } corrected ? corrected : r.Wire ?? phaseMinimum;
-        if (r.Device is ProtectiveDevice.InstantaneousTripBreaker or ProtectiveDevice.MotorShortCircuitProtector)
+        // A tap of a group circuit is grounded for the circuit's device (250.122(A), 430.53(D)); none written yet is asked for there.
+        if (IsGroupTap(motor))
+        {
+            if (motor.Feeder.ProtectionRating?.Value.Value is not { } groupDevice) return;
+            // The tap's own minimum carries what 430.53(D) asks as well as 430.22: a tap that size is not "increased" (250.122(B)).
+            var tapMinimum = r.TapAmpacity?.Value is { } tap
+                ? cache.MinimumWire(Math.Max(tap, r.RequiredAmpacity?.Value ?? 0), settings.Conditions, design is DesignLetter.B or DesignLetter.C or DesignLetter.D).Value ?? phaseMinimum
+                : phaseMinimum;
+            r.MinimumGround = cache.Ground(groupDevice, material, phase, tapMinimum, "NEC 250.122(A), 430.53(D)");
+        }
+        else if (r.Device is ProtectiveDevice.InstantaneousTripBreaker or ProtectiveDevice.MotorShortCircuitProtector)
             r.MinimumGround = cache.GroundForInstantaneousTrip(new ProtectionInput(flc, r.Device, phases, kind, design, efficiency), material, phase, phaseMinimum);
         else if ((r.ProtectionRating ?? r.MaximumProtection?.Value ?? r.FirePumpMinimumProtection?.Value) is { } device)
             r.MinimumGround = cache.Ground(device, material, phase, phaseMinimum, rule);

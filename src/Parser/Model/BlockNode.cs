@@ -153,6 +153,10 @@ public abstract class CircuitNode(Statement header, BlockNode? parent) : BlockNo
     public Located<Quantity>? Sccr => Get<Quantity>("sccr", "rating");
     /// <summary>The interrupting rating of this circuit's protective device.</summary>
     public Located<Quantity>? Interrupting => Get<Quantity>("interrupting", "rating");
+    public Located<Quantity>? DisconnectRating => Get<Quantity>("disconnect", "rating");
+    public Located<Quantity>? DisconnectPower => Get<Quantity>("disconnect", "power");
+    /// <summary>The device is stated to provide the motor's overload protection as well (430.55).</summary>
+    public Located<bool>? ProtectionCombinedOverload => Get<bool>("protection", "combined");
 }
 
 public sealed class FeederNode(Statement header, ProjectNode? project) : CircuitNode(header, project)
@@ -175,6 +179,11 @@ public sealed class FeederNode(Statement header, ProjectNode? project) : Circuit
     public Located<ProtectiveDevice>? PrimaryProtection => Get<ProtectiveDevice>("primary-protection", "device");
     public Located<Quantity>? PrimaryProtectionRating => Get<Quantity>("primary-protection", "rating");
     public Located<Quantity>? PrimaryInterrupting => Get<Quantity>("primary-protection", "interrupting");
+    /// <summary>The block is one branch circuit supplying several motors, under this 430.53 permission.</summary>
+    public Located<BranchGroupKind>? BranchGroup => Get<BranchGroupKind>("branch-group", "permission");
+    /// <summary>A 430.26 demand factor, with the authority's permission as written.</summary>
+    public Located<Quantity>? DemandFactor => Get<Quantity>("demand-factor", "factor");
+    public Located<string>? DemandPermission => Get<string>("demand-factor", "permission");
     public IReadOnlyList<MotorNode> Motors => _motors;
     public IReadOnlyList<LoadNode> Loads => _loads;
 
@@ -205,8 +214,6 @@ public sealed class MotorNode(Statement header, FeederNode feeder) : CircuitNode
     public Located<StartingMethod>? Starting => Get<StartingMethod>("starting", "method");
     public Located<Quantity>? DriveInputCurrent => Get<Quantity>("starting", "input-current");
     public Located<Quantity>? Overload => Get<Quantity>("overload", "setting");
-    public Located<Quantity>? DisconnectRating => Get<Quantity>("disconnect", "rating");
-    public Located<Quantity>? DisconnectPower => Get<Quantity>("disconnect", "power");
     public Located<Quantity>? ControllerPower => Get<Quantity>("controller", "power");
     public Located<int>? Quantity => Get<int>("quantity", "count");
     /// <summary>Read for every attribute a motor inherits, so kept once read (a node never changes).</summary>
@@ -223,6 +230,9 @@ public sealed class MotorNode(Statement header, FeederNode feeder) : CircuitNode
     }
     public Located<NameplateBasis>? Application => Get<NameplateBasis>("application", "kind");
     public bool HardStart => Has("hard-start");
+    /// <summary>The interlock this motor belongs to (430.24 Exception No. 3) and its set in it.</summary>
+    public Located<string>? Interlock => Get<string>("interlock", "name");
+    public Located<int>? InterlockSet => Get<int>("interlock", "set");
     public Located<FireServiceRole>? FireService => Get<FireServiceRole>("fire-service", "role");
     public Located<Quantity>? LockedRotorCurrent => Get<Quantity>("locked-rotor", "current");
     public Located<WindingScope>? OverloadWindings => Get<WindingScope>("overload", "windings");

@@ -166,6 +166,23 @@ public static class Keywords
         new("non-continuous", false, "counted at 100 % (the default)", "noncontinuous"),
     ];
 
+    /// <summary>The 430.53 permission a branch circuit supplying several motors is installed under.</summary>
+    public static readonly WordChoice[] BranchGroupKinds =
+    [
+        new("small-motors", BranchGroupKind.SmallMotors,
+            "430.53(A): motors of 1 hp or less, each of 6 A or less, on a 120 V circuit protected at 20 A or less, or a circuit of 1000 V or less protected at 15 A or less"),
+        new("smallest-protected", BranchGroupKind.SmallestProtected,
+            "430.53(B): the branch device is no larger than 430.52 allows for the smallest motor"),
+        new("listed-group", BranchGroupKind.ListedGroup,
+            "430.53(C): controllers and overloads listed for group installation; the device up to 430.52 for the largest motor plus the others' full-load currents"),
+    ];
+
+    /// <summary>A word of our own on a protection line: the device is also the motor's overload protection (430.55).</summary>
+    public static readonly WordChoice[] CombinedProtection =
+    [
+        new("combined-overload", true, "the device also provides the motor's overload protection (430.55): rated or set as 430.32 requires of an overload"),
+    ];
+
     public static readonly WordChoice[] SourceKinds =
     [
         new("utility", SourceKind.Utility, "a utility supply: give its available fault current at the service (kA) and its X/R"),
@@ -231,8 +248,15 @@ public static class Keywords
         new("protection", [Feeder, Motor], null,
             [new("device", Word, true, Devices), new("rating", Current, false, Check: Positive),
              new("listing", Word, false, DeviceListings), new("windings", Word, false, WindingScopes),
-             new("combination", Word, false, Combinations), new("class", Word, false, FuseClasses)],
-            "Short-circuit and ground-fault protective device and its rating; optionally fire-pump-listed, per-winding or both-windings, listed-combination, class-cc."),
+             new("combination", Word, false, Combinations), new("class", Word, false, FuseClasses),
+             new("combined", Word, false, CombinedProtection)],
+            "Short-circuit and ground-fault protective device and its rating; optionally fire-pump-listed, per-winding or both-windings, listed-combination, class-cc, combined-overload."),
+        new("branch-group", [Feeder], null, [new("permission", Word, true, BranchGroupKinds)],
+            "This block is one branch circuit supplying several motors (430.53): small-motors (A), smallest-protected (B) or listed-group (C)."),
+        new("demand-factor", [Feeder], null,
+            [new("factor", Percent, true, Check: v => v is > 0 and <= 100 ? null : "must be above 0 % and at most 100 %"),
+             new("permission", ArgKind.Text, true)],
+            "A demand factor on the motors' share of the 430.24 ampacity, granted by the authority having jurisdiction (430.26): the factor and the permission, quoted."),
 
         new("transformer", [Feeder], null,
             [new("rating", ApparentPower, true, Check: Positive), new("primary", Voltage, true, Check: Positive),
@@ -265,9 +289,12 @@ public static class Keywords
         new("overload", [Motor], null,
             [new("setting", Current, true, Check: Positive), new("windings", Word, false, WindingScopes), new("location", Word, false, OverloadLocations)],
             "Overload relay setting or heater rating; for a part-winding motor, per-winding or both-windings; for a wye-delta motor, delta-leads or line-leads."),
-        new("disconnect", [Motor], null,
+        new("disconnect", [Feeder, Motor], null,
             [new("rating", Current, false, Check: Positive), new("power", Power, false, Check: Positive)],
-            "Disconnecting means: ampere rating and horsepower rating."),
+            "Disconnecting means: ampere rating and horsepower rating; on a feeder, one disconnect for everything it supplies (430.110(C))."),
+        new("interlock", [Motor], null,
+            [new("name", Tag, true), new("set", Integer, false, Check: Positive)],
+            "Motors of one interlock never run at the same time as those of another set of it (430.24 Exception No. 3): the interlock's name and this motor's set (its own when not given)."),
         new("controller", [Motor], null, [new("power", Power, true, Check: Positive)], "Controller horsepower rating."),
         new("quantity", [Motor], null, [new("count", Integer, true, Check: Positive)], "Number of identical motors this line stands for."),
         new("like", [Motor], null, [new("motor", Tag, true)], "Take every attribute not given here from another motor."),

@@ -34,8 +34,11 @@ public static class Disconnects
         var hp = Math.Max(byFlc.Value, byLrc.Value);
         var amps = summedFullLoadAmps * 1.15m;
         return Result<DisconnectRating>.Of(new DisconnectRating(amps, hp),
-            new Step("Equivalent hp from full-load current", $"{Numbers.Horsepower(byFlc.Value)} hp", "NEC 430.110(C)(1)", $"summed {Format.Amps(summedFullLoadAmps)}"),
-            new Step("Equivalent hp from locked-rotor current", $"{Numbers.Horsepower(byLrc.Value)} hp", "NEC 430.110(C)(1)", $"summed {Format.Amps(summedLockedRotorAmps)}"),
+            new Step("Equivalent hp from full-load current", $"{Numbers.Horsepower(byFlc.Value)} hp", $"NEC 430.110(C)(1), Table {(phases == Phases.Single ? "430.248" : "430.250")}",
+                $"summed {Format.Amps(summedFullLoadAmps)}: the smallest row carrying at least that"),
+            new Step("Equivalent hp from locked-rotor current", $"{Numbers.Horsepower(byLrc.Value)} hp", $"NEC 430.110(C)(1), Table {(phases == Phases.Single ? "430.251(A)" : "430.251(B)")}",
+                $"summed {Format.Amps(summedLockedRotorAmps)}: the smallest row at or above it"),
+            new Step("Disconnect horsepower rating", $"{Numbers.Horsepower(hp)} hp", "NEC 430.110(C)(1)", "the larger of the two: the combined load taken as one motor"),
             Step.Amps("Disconnect ampere rating", amps, "NEC 430.110(C)(2)", $"115 % × summed {Format.Amps(summedFullLoadAmps)}"));
     }
 
