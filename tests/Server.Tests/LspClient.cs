@@ -13,6 +13,7 @@ public sealed class LspClient : IAsyncDisposable
 {
     private readonly JsonRpc _rpc;
     private readonly ConcurrentDictionary<string, PublishDiagnosticsParams> _latest = new();
+    private readonly ConcurrentDictionary<string, int> _publications = new();
     private readonly List<(Func<PublishDiagnosticsParams, bool> Match, TaskCompletionSource<PublishDiagnosticsParams> Done)> _waiters = [];
     private readonly object _gate = new();
 
@@ -45,6 +46,9 @@ public sealed class LspClient : IAsyncDisposable
 
     public Task Change(string uri, int version, params TextDocumentContentChangeEvent[] changes) =>
         Notify("textDocument/didChange", new DidChangeTextDocumentParams(new VersionedTextDocumentIdentifier(uri, version), changes));
+
+    /// <summary>How many times diagnostics of <paramref name="uri"/> have been published so far.</summary>
+    public int Publications(string uri) => _publications.GetValueOrDefault(uri);
 
     /// <summary>Waits for diagnostics of <paramref name="uri"/> at <paramref name="version"/> (or any version when null).</summary>
     public Task<PublishDiagnosticsParams> DiagnosticsAsync(string uri, int? version = null, TimeSpan? timeout = null) =>
@@ -83,6 +87,7 @@ public sealed class LspClient : IAsyncDisposable
         lock (_gate)
         {
             _latest[p.Uri] = p;
+            _publications.AddOrUpdate(p.Uri, 1, (_, n) => n + 1);
             foreach (var w in _waiters.Where(w => w.Match(p)).ToList())
             {
                 _waiters.Remove(w);

@@ -107,4 +107,33 @@ public sealed class PlantEditorTests : IDisposable
         // Without MCC-3 nothing reuses P-101.
         await server.Client.DiagnosticsWhere(Uri("mcc-1-retort.motors"), p => p.Diagnostics.All(d => d.Code != "P030"));
     }
+
+    /// <summary>
+    /// An edit in one file re-publishes only the files whose diagnostics changed: a closed file whose
+    /// findings are the same is not sent again (the client already shows them), the edited file is.
+    /// </summary>
+    [Fact]
+    public async Task AnEditSendsOnlyTheFilesWhoseDiagnosticsChanged()
+    {
+        const string edited = "mcc-1-retort.motors";
+        await using var server = await OpenAsync(edited);
+        var others = new[] { "mcc-2-filling.motors", "mcc-3-cold-store.motors", "switchboard.motors" };
+        foreach (var f in others) await server.Client.DiagnosticsAsync(Uri(f));
+        var before = others.ToDictionary(f => f, f => server.Client.Publications(Uri(f)));
+        Assert.All(before.Values, n => Assert.Equal(1, n));
+
+        // Words typed into the comment at the top (no line moves: MCC-3's `like P-102` points into
+        // this file, so moving lines would rightly change its related locations): nothing changes anywhere else.
+        await server.Client.Change(Uri(edited), 2, new TextDocumentContentChangeEvent(new Protocol.Range(new Position(0, 2), new Position(0, 2)), "checked: "));
+        await server.Client.DiagnosticsAsync(Uri(edited), 2);
+        // P-101's wire cut to 14 AWG: only MCC-1's file gains a finding. Its
+        // publication comes after every file of the comment's run, which shares the one publishing queue.
+        var (wireLine, wireColumn) = (At(edited, "wire 10 AWG", "10").Line, At(edited, "wire 10 AWG", "10").Character - 1);
+        await server.Client.Change(Uri(edited), 3, new TextDocumentContentChangeEvent(new Protocol.Range(new Position(wireLine, wireColumn), new Position(wireLine, wireColumn + 2)), "14"));
+        var now = await server.Client.DiagnosticsAsync(Uri(edited), 3);
+        Assert.Contains(now.Diagnostics, d => d.Code == "M101");
+
+        Assert.Equal(3, server.Client.Publications(Uri(edited)));
+        foreach (var f in others) Assert.True(before[f] == server.Client.Publications(Uri(f)), $"{f} sent again");
+    }
 }

@@ -26,6 +26,7 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
     private readonly Dictionary<string, long> _published = new(StringComparer.Ordinal);
     private readonly Dictionary<string, string> _plantOf = new(StringComparer.Ordinal);
     private readonly Dictionary<string, HashSet<string>> _plantFiles = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, (int? Version, Diagnostic[] Diagnostics)> _sent = new(StringComparer.Ordinal);
     private long _sequence;
     private readonly SemaphoreSlim _publishing = new(1, 1);
 
@@ -62,7 +63,7 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
             }
 
             _published[uri] = sequence;
-            await publish(new PublishDiagnosticsParams(uri, null, []));
+            await SendAsync(uri, null, []);
         }
         finally
         {
@@ -79,7 +80,7 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
         try
         {
             _published[uri] = sequence;
-            await publish(new PublishDiagnosticsParams(uri, null, []));
+            await SendAsync(uri, null, []);
         }
         finally
         {
@@ -135,7 +136,7 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
                 if (_published.TryGetValue(f.Uri, out var last) && last > sequence) continue;
                 _published[f.Uri] = sequence;
                 _plantOf[f.Uri] = root;
-                await publish(new PublishDiagnosticsParams(f.Uri, f.Version, f.Diagnostics));
+                await SendAsync(f.Uri, f.Version, f.Diagnostics);
             }
 
             if (_plantFiles.TryGetValue(root, out var before))
@@ -155,7 +156,7 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
         {
             if (_published.TryGetValue(f.Uri, out var last) && last > sequence) continue;
             _published[f.Uri] = sequence;
-            await publish(new PublishDiagnosticsParams(f.Uri, f.Version, f.Diagnostics));
+            await SendAsync(f.Uri, f.Version, f.Diagnostics);
         }
 
         // The document was part of a plant and is not any more: the plant's other files described it.
@@ -180,6 +181,32 @@ public sealed class DiagnosticScheduler(Func<PublishDiagnosticsParams, Task> pub
     {
         if (_published.TryGetValue(uri, out var last) && last > sequence) return;
         _published[uri] = sequence;
-        await publish(new PublishDiagnosticsParams(uri, null, []));
+        await SendAsync(uri, null, []);
+    }
+
+    /// <summary>
+    /// Sends a file's diagnostics unless the client already has exactly these for the same version:
+    /// an edit in one file of a plant re-publishes the plant, and most of its files (closed, version
+    /// null) come out the same; sending them again would cost the server and the client a file's
+    /// worth of diagnostics each per keystroke for nothing. Called under the publishing lock.
+    /// </summary>
+    private async Task SendAsync(string uri, int? version, Diagnostic[] diagnostics)
+    {
+        if (_sent.TryGetValue(uri, out var was) && was.Version == version && SameDiagnostics(was.Diagnostics, diagnostics)) return;
+        _sent[uri] = (version, diagnostics);
+        await publish(new PublishDiagnosticsParams(uri, version, diagnostics));
+    }
+
+    private static bool SameDiagnostics(Diagnostic[] a, Diagnostic[] b)
+    {
+        if (a.Length != b.Length) return false;
+        for (var i = 0; i < a.Length; i++)
+        {
+            // Records compare their fields; the related locations are an array, compared item by item.
+            if (a[i] with { RelatedInformation = null } != b[i] with { RelatedInformation = null }) return false;
+            if (!(a[i].RelatedInformation ?? []).SequenceEqual(b[i].RelatedInformation ?? [])) return false;
+        }
+
+        return true;
     }
 }
