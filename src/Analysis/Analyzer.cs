@@ -42,9 +42,10 @@ public static class Analyzer
     }
 
     /// <summary>
-    /// The analysis of a document re-read after a one-line edit (<see cref="ParseResult.Edit"/>),
-    /// made from the previous analysis: only what the edit can affect is sized again — the edited
-    /// motor and the motors written 'like' it (or every motor of an edited feeder), the feeders
+    /// The analysis of a document re-read after edits inside lines (<see cref="ParseResult.Edit"/>,
+    /// one edit or several chained), made from the previous analysis: only what the edits can
+    /// affect is sized again — the edited motors and the motors written 'like' them (and every
+    /// motor of an edited feeder), the feeders
     /// they are on and the feeders those are supplied from; feeders further down only get their
     /// drop from the source brought up to date. Everything else is kept. Null when
     /// <paramref name="parse"/> is not such a re-read of <paramref name="previous"/>'s document;
@@ -63,12 +64,17 @@ public static class Analyzer
         var motors = previous.MotorTable.ToBuilder();
         var owned = new HashSet<MotorResult>(ReferenceEqualityComparer.Instance);
         var removed = new HashSet<Finding>(ReferenceEqualityComparer.Instance);
-        foreach (var old in edit.OldFeeder.Motors)
+        var replacedBy = new Dictionary<FeederNode, FeederNode>(edit.Feeders.Count);
+        foreach (var (oldFeeder, newFeeder) in edit.Feeders)
         {
-            var copy = (MotorNode)edit.Copies[old];
-            if (!motors.Remove(old, out var earlier)) continue;
-            if (resize.Contains(copy)) removed.UnionWith(earlier.Findings);
-            else owned.Add(motors[copy] = earlier.Rebind(copy));
+            replacedBy[newFeeder] = oldFeeder;
+            foreach (var old in oldFeeder.Motors)
+            {
+                var copy = (MotorNode)edit.Copies[old];
+                if (!motors.Remove(old, out var earlier)) continue;
+                if (resize.Contains(copy)) removed.UnionWith(earlier.Findings);
+                else owned.Add(motors[copy] = earlier.Rebind(copy));
+            }
         }
 
         var run = new SizingPass(parse, previous.TakeCache());
@@ -91,7 +97,7 @@ public static class Analyzer
         foreach (var feeder in model.Feeders)
         {
             var now = feeders[feeder];
-            var before = previous.Feeders.GetValueOrDefault(ReferenceEquals(feeder, edit.NewFeeder) ? edit.OldFeeder : feeder);
+            var before = previous.Feeders.GetValueOrDefault(replacedBy.GetValueOrDefault(feeder) ?? feeder);
             if (ReferenceEquals(now, before)) continue;
             if (before is not null)
             {
@@ -102,7 +108,7 @@ public static class Analyzer
             AddFeederFindings(added, now);
         }
 
-        var parseFindings = UpdateScope.SpliceLine(previous.ParseFindings, parse.Diagnostics, edit.Line, removed, added);
+        var parseFindings = UpdateScope.SpliceLines(previous.ParseFindings, parse.Diagnostics, edit.Lines, removed, added);
         // The fault study spans the whole system (every motor feeds every fault), so it is worked out again in full: linear and cheap.
         var motorMap = motors.ToMap();
         var power = FaultStudy.Run(model, motorMap, feeders);

@@ -5,22 +5,22 @@ using MotorLang.Parser.Model;
 
 namespace MotorLang.Analysis;
 
-/// <summary>What an update after a one-line edit must size again, and the parse findings it replaces.</summary>
+/// <summary>What an update after edits inside lines must size again, and the parse findings it replaces.</summary>
 internal static class UpdateScope
 {
     /// <summary>
-    /// The edited motor, or every motor of an edited feeder (they inherit its settings); then every
+    /// The edited motors, and every motor of an edited feeder (they inherit its settings); then every
     /// motor written 'like' one of those, directly or through others, since it takes their values
     /// and defers to their findings.
     /// </summary>
     internal static HashSet<MotorNode> MotorsToResize(ModelEdit edit, MotorList model, List<MotorNode> likeUsers)
     {
-        var changed = edit.Edited switch
+        var changed = new HashSet<MotorNode>();
+        foreach (var block in edit.Edited)
         {
-            FeederNode feeder => feeder.Motors.ToHashSet(),
-            MotorNode motor => [motor],
-            _ => new HashSet<MotorNode>(),
-        };
+            if (block is FeederNode feeder) changed.UnionWith(feeder.Motors);
+            else if (block is MotorNode motor) changed.Add(motor);
+        }
 
         var resize = new HashSet<MotorNode>(changed);
         if (changed.Count == 0) return resize;
@@ -52,12 +52,12 @@ internal static class UpdateScope
     }
 
     /// <summary>
-    /// The edited feeder, the feeders of the re-sized motors, and every feeder those are supplied
+    /// The replaced feeders, the feeders of the re-sized motors, and every feeder those are supplied
     /// from (their loads include the motors further down).
     /// </summary>
     internal static HashSet<FeederNode> FeedersToResize(ModelEdit edit, HashSet<MotorNode> resize, SizingPass run)
     {
-        var affected = new HashSet<FeederNode> { edit.NewFeeder };
+        var affected = new HashSet<FeederNode>(edit.Feeders.Values);
         foreach (var motor in resize) affected.Add(motor.Feeder);
         foreach (var feeder in affected.ToList())
         {
@@ -69,22 +69,54 @@ internal static class UpdateScope
         return affected;
     }
 
-    /// <summary>The parse findings with the edited line's replaced; the replaced ones go to <paramref name="removed"/>, the new ones to <paramref name="added"/>.</summary>
-    internal static ImmutableArray<Finding> SpliceLine(ImmutableArray<Finding> before, ImmutableArray<Diagnostic> diagnostics, int line,
+    /// <summary>The parse findings with the edited lines' replaced; the replaced ones go to <paramref name="removed"/>, the new ones to <paramref name="added"/>.</summary>
+    internal static ImmutableArray<Finding> SpliceLines(ImmutableArray<Finding> before, ImmutableArray<Diagnostic> diagnostics, IReadOnlyList<int> lines,
         HashSet<Finding> removed, List<RankedFinding> added)
     {
-        var fresh = diagnostics.Where(d => d.Range.Start.Line == line).Select(Finding.From).ToList();
-        var first = 0;
-        while (first < before.Length && before[first].Range.Start.Line < line) first++;
-        var end = first;
-        while (end < before.Length && before[end].Range.Start.Line == line) end++;
-        if (first == end && fresh.Count == 0) return before;
-        for (var i = first; i < end; i++) removed.Add(before[i]);
-        for (var i = 0; i < fresh.Count; i++) added.Add(new RankedFinding(fresh[i], RankedFinding.ParseRank(line, i)));
-        var builder = ImmutableArray.CreateBuilder<Finding>(before.Length - (end - first) + fresh.Count);
-        builder.AddRange(before.AsSpan()[..first]);
-        builder.AddRange(fresh);
-        builder.AddRange(before.AsSpan()[end..]);
-        return builder.MoveToImmutable();
+        if (lines.Count == 0) return before;
+        var edited = lines.Count == 1 ? null : lines.ToHashSet();
+        bool Edited(int line) => edited?.Contains(line) ?? line == lines[0];
+
+        // One pass over both lists (each in line order), however many lines were edited.
+        var builder = ImmutableArray.CreateBuilder<Finding>(before.Length);
+        var changed = false;
+        var d = 0;
+        var freshLine = -1;
+        var freshIndex = 0;
+        void TakeFreshUpTo(int line, bool inclusive)
+        {
+            while (d < diagnostics.Length && diagnostics[d].Range.Start.Line is var l && (l < line || (inclusive && l == line)))
+            {
+                if (Edited(l))
+                {
+                    var f = Finding.From(diagnostics[d]);
+                    freshIndex = l == freshLine ? freshIndex + 1 : 0;
+                    freshLine = l;
+                    added.Add(new RankedFinding(f, RankedFinding.ParseRank(l, freshIndex)));
+                    builder.Add(f);
+                    changed = true;
+                }
+
+                d++;
+            }
+        }
+
+        foreach (var f in before)
+        {
+            var line = f.Range.Start.Line;
+            if (Edited(line))
+            {
+                TakeFreshUpTo(line, inclusive: true);
+                removed.Add(f);
+                changed = true;
+                continue;
+            }
+
+            TakeFreshUpTo(line, inclusive: true);
+            builder.Add(f);
+        }
+
+        TakeFreshUpTo(int.MaxValue, inclusive: true);
+        return changed ? builder.ToImmutable() : before;
     }
 }

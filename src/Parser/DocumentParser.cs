@@ -80,6 +80,20 @@ public static class DocumentParser
     public static ParseResult? ReparseLine(ParseResult previous, int lineIndex, string newContent) =>
         LineReparser.Reparse(previous, lineIndex, newContent);
 
+    /// <summary>
+    /// The same, for an edit made on top of earlier ones that have not been analysed: the result's
+    /// <see cref="ParseResult.Edit"/> describes every change since <paramref name="since"/> (the
+    /// model of the last analysed version), so one update sizes again all that the edits together
+    /// reach. When <paramref name="previous"/> is neither that model nor chained from it, the
+    /// result has no edit and the caller analyses it in full.
+    /// </summary>
+    public static ParseResult? ReparseLine(ParseResult previous, int lineIndex, string newContent, MotorList since)
+    {
+        if (LineReparser.Reparse(previous, lineIndex, newContent) is not { } reread) return null;
+        if (ReferenceEquals(previous.Model, since)) return reread;
+        return reread with { Edit = previous.Edit is { } earlier && ReferenceEquals(earlier.Before, since) ? earlier.Then(reread.Edit) : null };
+    }
+
     private static ParseResult Unreadable(string text, bool hasBom, List<Diagnostic> diagnostics)
     {
         // Keep the text as one opaque line so printing the tree still gives the input back.

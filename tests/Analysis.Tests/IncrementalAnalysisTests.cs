@@ -107,6 +107,44 @@ public class IncrementalAnalysisTests
     }
 
     /// <summary>
+    /// Edits re-read one after another without analysing in between, each chained onto the model
+    /// of the analysis made before the first: one update then equals a fresh analysis of the final
+    /// text (it sizes again the union of what every edit reached).
+    /// </summary>
+    [Fact]
+    public void ChainedEditsUpdatedOnceEqualAFreshAnalysis()
+    {
+        var chained = 0;
+        var sessions = 0;
+        Sessions.Sample(session =>
+        {
+            var text = Documents[session.Document];
+            var analysis = Analyzer.Analyze(text);
+            var parse = analysis.Parse;
+            foreach (var (linePick, startPick, lengthPick, insert) in session.Edits)
+            {
+                var (newText, line) = EditOneLine(text, linePick, startPick, lengthPick, insert);
+                var content = newText.Split('\n')[line].TrimEnd('\r');
+                var reread = newText.Split('\n')[line].EndsWith('\r') == text.Split('\n')[line].EndsWith('\r')
+                    ? DocumentParser.ReparseLine(parse, line, content, analysis.Parse.Model)
+                    : null;
+                text = newText;
+                if (reread is null) return;
+                parse = reread;
+            }
+
+            Interlocked.Increment(ref sessions);
+            var updated = Analyzer.Update(analysis, parse);
+            Assert.Equal(text, parse.Tree.Print());
+            if (updated is null) return;
+            Interlocked.Increment(ref chained);
+            Assert.Equal(Describe(Analyzer.Analyze(text)), Describe(updated));
+        }, iter: 600);
+
+        Assert.True(chained > sessions / 2, $"only {chained} of {sessions} chains were updated");
+    }
+
+    /// <summary>
     /// A list large enough that the shared tables fold their layers of changes into new bases
     /// (600 motors, 15 feeders, a chain of 'from', 'like' across feeders), edited many times in a row.
     /// </summary>

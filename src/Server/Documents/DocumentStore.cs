@@ -24,11 +24,7 @@ public sealed class DocumentStore
         lock (_gate)
         {
             if (!_documents.TryGetValue(uri, out var current)) return null;
-            var list = changes as IReadOnlyList<TextDocumentContentChangeEvent> ?? changes.ToList();
-            var next = list is [{ Range: { } r } c] && r.Start.Line == r.End.Line && c.Text.AsSpan().IndexOfAny('\n', '\r') < 0
-                ? current.WithLineEdit(version, r.Start.Line, r.Start.Character, r.End.Character, c.Text)
-                : null;
-            return _documents[uri] = next ?? new DocumentSnapshot(uri, version, TextChanges.Apply(current.Text, list));
+            return _documents[uri] = current.WithChanges(version, changes.ToArray());
         }
     }
 
