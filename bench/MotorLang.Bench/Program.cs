@@ -30,6 +30,12 @@ switch (args)
     case ["process", var n, var motorlang]:
         await MemoryReports.Process(int.Parse(n), motorlang);
         break;
+    case ["typing", var n, var motorlang, ..]:
+        await TypingSession.Typing(int.Parse(n), motorlang, debounceMs: args.Length > 3 ? int.Parse(args[3]) : 150);
+        break;
+    case ["paste", var n, var motorlang]:
+        await TypingSession.Paste(int.Parse(n), motorlang);
+        break;
     case ["open", var megabytes, var motorlang]:
         await LargeOpen.Run(int.Parse(megabytes), motorlang);
         break;

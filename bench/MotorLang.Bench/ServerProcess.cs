@@ -3,12 +3,12 @@ using MotorLang.Server.Tests;
 
 namespace MotorLang.Bench;
 
-/// <summary>The real server process (`motorlang lsp`, no debounce) with an initialized client: what the process-level benchmarks drive.</summary>
+/// <summary>The real server process (`motorlang lsp`, no debounce unless asked) with an initialized client: what the process-level benchmarks drive.</summary>
 public static class ServerProcess
 {
-    public static async Task<(Process Process, LspClient Client)> StartAsync(string motorlang)
+    public static async Task<(Process Process, LspClient Client)> StartAsync(string motorlang, int debounceMs = 0)
     {
-        var info = new ProcessStartInfo("dotnet", ["exec", motorlang, "lsp", "--debounce-ms", "0"])
+        var info = new ProcessStartInfo("dotnet", ["exec", motorlang, "lsp", "--debounce-ms", debounceMs.ToString(System.Globalization.CultureInfo.InvariantCulture)])
         {
             RedirectStandardInput = true, RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false,
         };
