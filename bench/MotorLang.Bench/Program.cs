@@ -31,7 +31,8 @@ switch (args)
         await MemoryReports.Process(int.Parse(n), motorlang);
         break;
     case ["typing", var n, var motorlang, ..]:
-        await TypingSession.Typing(int.Parse(n), motorlang, debounceMs: args.Length > 3 ? int.Parse(args[3]) : 150);
+        await TypingSession.Typing(int.Parse(n), motorlang, values: args.Contains("values"),
+            debounceMs: args.Skip(3).FirstOrDefault(a => a.All(char.IsAsciiDigit)) is { } ms ? int.Parse(ms) : 150);
         break;
     case ["paste", var n, var motorlang]:
         await TypingSession.Paste(int.Parse(n), motorlang);

@@ -27,7 +27,12 @@ public static class TypingSession
         "    code-letter G",
     ];
 
-    public static async Task Typing(int motors, string motorlang, int keystrokes = 180, int intervalMs = 30, int debounceMs = 150, int sessions = 3)
+    /// <summary>
+    /// Types a new motor block (<paramref name="values"/> false), or retypes values inside existing
+    /// lines (true: each keystroke a digit typed into a motor's length, or taken out again), in
+    /// <paramref name="sessions"/> sessions at different places of the list.
+    /// </summary>
+    public static async Task Typing(int motors, string motorlang, bool values = false, int keystrokes = 180, int intervalMs = 30, int debounceMs = 150, int sessions = 3)
     {
         var (started, client) = await ServerProcess.StartAsync(motorlang, debounceMs);
         using var process = started;
@@ -36,7 +41,8 @@ public static class TypingSession
         await client.Open(uri, text);
         await client.DiagnosticsAsync(uri, 1, TimeSpan.FromMinutes(2));
         var version = 1;
-        Console.WriteLine($"{motors} motors, {text.Length / 1024} K characters; {keystrokes} keystrokes {intervalMs} ms apart, debounce {debounceMs} ms");
+        Console.WriteLine($"{motors} motors, {text.Length / 1024} K characters; {keystrokes} keystrokes {intervalMs} ms apart, debounce {debounceMs} ms, " +
+                          (values ? "digits typed into and taken out of motors' lengths" : "typing a new motor block"));
         for (var session = 0; session < sessions; session++)
         {
             await Task.Delay(TimeSpan.FromSeconds(4));
@@ -44,7 +50,7 @@ public static class TypingSession
             // At a blank line between two motors, spread over the list.
             var lines = text.Split('\n');
             var at = BlankBefore(lines, lines.Length * (session + 1) / (sessions + 1));
-            var keys = Keystrokes(session, at, keystrokes);
+            var keys = values ? ValueKeystrokes(lines, at, keystrokes) : Keystrokes(session, at, keystrokes);
             using var sampler = new Memory.Sampler(process.Id);
             var clock = Stopwatch.StartNew();
             var sent = TimeSpan.Zero;
@@ -143,6 +149,22 @@ public static class TypingSession
         }
 
         return keys.Take(count).ToList();
+    }
+
+    /// <summary>Digits typed into the lengths of the motors after line <paramref name="from"/>, each taken out again by the next keystroke.</summary>
+    private static List<TextDocumentContentChangeEvent> ValueKeystrokes(string[] lines, int from, int count)
+    {
+        var lengthLines = QuickTiming.LengthLines(lines).Where(l => l > from).ToArray();
+        var keys = new List<TextDocumentContentChangeEvent>();
+        for (var i = 0; keys.Count < count; i++)
+        {
+            var at = new Position(lengthLines[i / 2 % lengthLines.Length], QuickTiming.LengthPrefix.Length);
+            keys.Add(i % 2 == 0
+                ? new TextDocumentContentChangeEvent(new Server.Protocol.Range(at, at), ((i / 2) % 9 + 1).ToString(CultureInfo.InvariantCulture))
+                : new TextDocumentContentChangeEvent(new Server.Protocol.Range(at, at with { Character = at.Character + 1 }), ""));
+        }
+
+        return keys;
     }
 
     private static int BlankBefore(string[] lines, int from)
