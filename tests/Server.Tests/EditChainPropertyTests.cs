@@ -70,11 +70,11 @@ public class EditChainPropertyTests
 
     /// <summary>
     /// An edit: its kind (0 one line, 1 the same number of lines rewritten, 2 lines inserted,
-    /// 3 lines deleted, 4 any range), a line and a column (fractions), a length, the text, and what
+    /// 3 lines deleted, 4 any range, 5 the whole text replaced), a line and a column (fractions), a length, the text, and what
     /// is read afterwards (0 nothing, 1 the tree, 2 the analysis).
     /// </summary>
     private static readonly Gen<(int Kind, double Line, double Column, int Length, string Typed, string Pasted, int Read)> Edit =
-        Gen.Select(Gen.Int[0, 4].Select(Gen.Int[0, 9], (k, w) => w < 5 ? 0 : k), Gen.Double[0, 1], Gen.Double[0, 1], Gen.Int[0, 3], Typed, Pasted,
+        Gen.Select(Gen.Int[0, 5].Select(Gen.Int[0, 19], (k, w) => w < 10 ? 0 : k == 5 && w < 18 ? 4 : k), Gen.Double[0, 1], Gen.Double[0, 1], Gen.Int[0, 3], Typed, Pasted,
             Gen.Int[0, 5].Select(r => r switch { 0 => 1, 1 => 2, _ => 0 }));
 
     [Fact]
@@ -202,6 +202,9 @@ public class EditChainPropertyTests
             }
             case 2:
                 return new TextDocumentContentChangeEvent(new Protocol.Range(new(line, 0), new(line, 0)), edit.Pasted);
+            case 5:
+                // The whole text replaced (a client without incremental sync, or a reload), here by the text with one line typed into.
+                return new TextDocumentContentChangeEvent(null, TextChanges.Apply(text, [ChangeFor(text, edit with { Kind = 0 })]));
             case 3:
             {
                 var last = Math.Min(lines.Length - 1, line + edit.Length + 1);
