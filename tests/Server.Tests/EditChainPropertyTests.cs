@@ -98,6 +98,37 @@ public class EditChainPropertyTests
         Assert.Equal(total, updated);
     }
 
+    /// <summary>
+    /// A long burst of keystrokes, none read: the versions waiting unread stay bounded (a change
+    /// reads the one before it at the bound), and the last version still ends in one update equal
+    /// to a fresh analysis.
+    /// </summary>
+    [Fact]
+    public void ALongBurstOfUnreadChangesStaysBounded()
+    {
+        var text = Plant;
+        var store = new DocumentStore();
+        const string uri = "file:///burst.motors";
+        _ = store.Open(uri, 1, text).Analysis;
+        var line = Array.FindIndex(text.Split('\n'), l => l == "    length 500ft");
+        var column = "    length ".Length;
+        var maxPending = 0;
+        for (var i = 0; i < 3 * DocumentSnapshot.MaxPending; i++)
+        {
+            // A digit typed before the length, then taken out again.
+            var change = i % 2 == 0
+                ? new TextDocumentContentChangeEvent(new Protocol.Range(new(line, column), new(line, column)), (i % 9 + 1).ToString())
+                : new TextDocumentContentChangeEvent(new Protocol.Range(new(line, column), new(line, column + 1)), "");
+            text = TextChanges.Apply(text, [change]);
+            maxPending = Math.Max(maxPending, store.Change(uri, i + 2, [change])!.Pending);
+        }
+
+        Assert.InRange(maxPending, DocumentSnapshot.MaxPending, DocumentSnapshot.MaxPending + 1);
+        var last = store.Get(uri)!;
+        Assert.Equal(Describe(Analyzer.Analyze(text)), Describe(last.Analysis));
+        Assert.True(last.Updated);
+    }
+
     private static (int Updated, int Total) Run(Gen<(int Kind, double Line, double Column, int Length, string Typed, string Pasted, int Read)[]> edits,
         int iter, bool analyseFirst = false, string[]? documents = null)
     {
