@@ -23,6 +23,20 @@ public class ScheduleDataTests
         Assert.Equal(new TitleBlock("Shed", null, "0", null, null, null), bare.Title);
     }
 
+    // The press flywheel motor's control circuit in the schedule (hand calculation in ExampleScheduleTests): Table 430.72(B)
+    // Column A for 14 AWG copper 15 A; 430.72(C)(4) primary 500 % x 250 VA / 480 V = 2.6042 A; Table 430.37 three units.
+    [Fact]
+    public void PressLineRowCarriesTheControlCircuit()
+    {
+        var data = ScheduleDataBuilder.Of(Analyzer.Analyze(Example("press-line.motors")), "press-line.motors");
+        var pr = data.Motors.Single(m => m.Tag == "PR-301");
+        Assert.Equal(new Measure(15, "A"), pr.ControlConductorLimit);
+        Assert.Equal(2.6042m, Assert.NotNull(pr.ControlPrimaryLimit).Value, 4);
+        Assert.Equal(3, pr.OverloadUnitsRequired);
+        var tc = data.Motors.Single(m => m.Tag == "TC-302");
+        Assert.Equal((null, null, null), (tc.ControlConductorLimit, tc.ControlPrimaryLimit, tc.OverloadUnitsRequired));
+    }
+
     [Fact]
     public void DairyMotorRowHoldsNumbersWithUnits()
     {

@@ -51,6 +51,8 @@ public enum Reach
     BranchGroup,
     /// <summary>Feeders with a <c>demand-factor</c> (430.26).</summary>
     DemandFactor,
+    /// <summary>Motors that have overload protection: not motor-compressors (Article 440 Part VI is not checked) or fire pumps (695.6(D)).</summary>
+    MotorWithOverload,
 }
 
 /// <summary>A rule that bears on a circuit but that MotorLang does not check: the rule, what it covers (one line), and why it is left out.</summary>
@@ -85,6 +87,8 @@ public static class NotChecked
             "the list does not record how control wiring is run, grounded or disconnected", Reach.EveryMotor),
         new("430.72(B)", "the conductors between the motor branch and the control transformer's primary",
             "the list records the transformer's primary device, not its primary conductors", Reach.ControlTransformer),
+        new("430.72(B) Exception No. 2", "that a control transformer whose secondary conductors are protected by its primary device alone has a single-phase, 2-wire secondary",
+            "the list does not record how the secondary is wired; it is taken to be 2-wire", Reach.ControlTransformer),
         new("Article 440", "a hermetic refrigerant motor-compressor written as a 'motor'",
             "a 'motor' is sized under Article 430 from its horsepower; write 'compressor' for the Article 440 rules", Reach.Motor),
         new("440.51–440.55", "motor-compressor overload protection (Article 440 Part VI)",
@@ -104,7 +108,7 @@ public static class NotChecked
         new("430.37", "the number of overload units",
             "no 'overload-units' is written", Reach.NoOverloadUnits),
         new("Table 430.37", "which conductors the overload units are in (for example the ungrounded conductor of a single-phase circuit)",
-            "the list does not say which conductors the units are in", Reach.Motor),
+            "the list does not say which conductors the units are in", Reach.MotorWithOverload),
         new("430.126", "motor overtemperature protection when the drive runs the motor at reduced speed",
             "it depends on the drive's and the motor's own protection features, which the list does not carry", Reach.DriveFedMotor),
         new("430.130, 110.3(B)", "the branch device type the drive calls for, and its largest rating unless 'drive-max-protection' is written",
@@ -180,6 +184,7 @@ public static class NotChecked
         Reach.ControlTransformer => motor.HasControlTransformer,
         Reach.NoOverloadUnits => !motor.IsCompressor && motor.OverloadUnitsRequired is null && motor.FireService != FireServiceRole.FirePump,
         Reach.BranchGroup => motor.Motor.Feeder.BranchGroup is not null,
+        Reach.MotorWithOverload => !motor.IsCompressor && motor.FireService != FireServiceRole.FirePump,
         _ => false,
     }).ToList();
     }
@@ -232,6 +237,7 @@ public static class NotChecked
         Reach.NoOverloadUnits => "motors with no `overload-units` (not motor-compressors or fire pumps)",
         Reach.BranchGroup => "circuits with `branch-group` and the motors on them",
         Reach.DemandFactor => "feeders with a `demand-factor`",
+        Reach.MotorWithOverload => "every motor (not motor-compressors or fire pumps)",
         _ => "every feeder",
     };
 }
