@@ -75,3 +75,34 @@ public class SmallMotorOverloadTests
         Assert.DoesNotContain(Analyzer.Analyze(M("overload 77A line-leads")).Findings, f => f.Code is FindingCodes.OverloadAboveRunningLimit or FindingCodes.OverloadTooLarge);
     }
 }
+
+/// <summary>NFPA 70-2023 430.32(D)(2)(a) Exception: a small portable motor within sight on a 120 V branch circuit at not over 20 A.</summary>
+public class SmallMotorTwentyAmpCircuitTests
+{
+    // 1/6 hp 115 V single-phase: Table 430.248 4.4 A. 430.52 inverse-time breaker 250 % x 4.4 = 11 A -> next standard 15 A.
+    private static string Sixth(string volts, string feederVolts, string breaker, params string[] lines) =>
+        Text([$"feeder F {feederVolts} 1ph", $"  motor FN 1/6hp {volts} 1ph", "    nameplate 4.2A", $"    protection inverse-time-breaker {breaker}", .. lines]);
+
+    [Fact]
+    public void TwentyAmpBreakerIsPermittedForAPortableMotorWithinSight()
+    {
+        // Trap: the general rule (430.52: at most 15 A) flags the 20 A breaker.
+        Assert.Contains("15 A", Single(Sixth("115V", "120V", "20A"), FindingCodes.ProtectionTooLarge).Message);
+        var text = Sixth("115V", "120V", "20A", "    manual-start portable within-sight");
+        var a = Analyzer.Analyze(text);
+        Assert.DoesNotContain(a.Findings, f => f.Code == FindingCodes.ProtectionTooLarge);
+        var section = Breakdown.MotorSections(a.Motors.Values.Single()).Single(s => s.Heading == "Short-circuit and ground-fault protection");
+        Assert.Contains(section.Steps, s => s.Rule == "NEC 430.32(D)(2)(a) Exception");
+        Assert.StartsWith("✓", section.Verdict);
+    }
+
+    [Fact]
+    public void TheExceptionStopsAtTwentyAmpsAndAtOneHundredTwentyVolts()
+    {
+        Assert.Contains("15 A", Single(Sixth("115V", "120V", "25A", "    manual-start portable within-sight"), FindingCodes.ProtectionTooLarge).Message);
+        // 1/6 hp 230 V: Table 430.248 2.2 A, 250 % = 5.5 A -> 10 A (the next standard rating, Table 240.6(A) 2023); a 240 V circuit is not a 120 V one.
+        Assert.Single(Analyzer.Analyze(Sixth("230V", "240V", "20A", "    manual-start portable within-sight")).Findings, f => f.Code == FindingCodes.ProtectionTooLarge);
+        // Permanently installed: no exception.
+        Assert.Single(Analyzer.Analyze(Sixth("115V", "120V", "20A", "    manual-start within-sight")).Findings, f => f.Code == FindingCodes.ProtectionTooLarge);
+    }
+}

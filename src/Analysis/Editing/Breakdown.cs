@@ -146,8 +146,10 @@ public static class Breakdown
             yield return new BreakdownSection("Short-circuit and ground-fault protection", fireMin.Steps,
                 fireMin.Unavailable ?? (m.FirePumpListedDevice ? "✓ listed for fire pump service; its curve was not checked" : Compare(m.ProtectionRating, fireMin.Value, "rating", atMost: false)));
         else if (m.MaximumProtection is { } max)
-            yield return new BreakdownSection("Short-circuit and ground-fault protection", max.Steps,
-                Compare(m.ProtectionRating, max.Value, "rating", atMost: true));
+            yield return new BreakdownSection("Short-circuit and ground-fault protection", max.Steps.Concat(m.SmallMotorCircuitAllowance?.Steps ?? []).ToList(),
+                m.SmallMotorCircuitAllowance is { } allowance
+                    ? Compare(m.ProtectionRating, allowance.Value, "rating", atMost: true) + " (430.32(D)(2)(a) Exception)"
+                    : Compare(m.ProtectionRating, max.Value, "rating", atMost: true));
         if (m.FireService == FireServiceRole.FirePump && m.NoOverloadRequired is { } none)
             yield return new BreakdownSection("Overload", none.Steps,
                 m.Overload is { } written ? $"✗ an overload of {Format.Amps(written)} is written" : "✓ none written");

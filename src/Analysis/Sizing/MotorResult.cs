@@ -161,6 +161,9 @@ public sealed class MotorResult(MotorNode motor)
     /// <summary>The largest secondary device Table 450.3(B) permits with primary and secondary protection (430.72(C)(2)).</summary>
     public Result<decimal>? ControlSecondaryLimit { get; internal set; }
 
+    /// <summary>The 20 A a small portable motor within sight may have on a 120 V branch circuit (430.32(D)(2)(a) Exception), where 430.52 gives less and it was used.</summary>
+    public Result<decimal>? SmallMotorCircuitAllowance { get; internal set; }
+
     /// <summary>The number of overload units Table 430.37 requires, when 'overload-units' is written.</summary>
     public Result<int>? OverloadUnitsRequired { get; internal set; }
     public int? OverloadUnits { get; internal set; }

@@ -1,4 +1,5 @@
 using MotorLang.Analysis.Findings;
+using MotorLang.Domain;
 using MotorLang.Parser.Diagnostics;
 using MotorLang.Parser.Model;
 using MotorLang.Sizing;
@@ -61,6 +62,22 @@ internal sealed partial class MotorSizer
         var exempt = Result<bool>.Of(true, new Step("Separate overload", "not required", "NEC 430.32(D)(2)(a)",
             "the branch short-circuit and ground-fault device may provide the overload protection, rated no larger than Article 430 Part IV (430.52) allows"));
         return (rule, exempt);
+    }
+
+    /// <summary>
+    /// 430.32(D)(2)(a) Exception: a motor of 1 hp or less, manually started, not permanently installed and
+    /// within sight from its controller, is permitted on a nominal 120 V branch circuit protected at not over
+    /// 20 A, even where 430.52 would give less. Only for a circuit of 110–120 V, a fuse or inverse-time
+    /// breaker and no drive maximum (which is never exceeded).
+    /// </summary>
+    private bool SmallMotorOnTwentyAmpCircuit(MotorNode motor, MotorResult r, decimal rating, bool driveCapped)
+    {
+        if (driveCapped || rating > 20m || r.Horsepower > 1m || r.Volts is < 110m or > 120m) return false;
+        if (r.Device is not (ProtectiveDevice.InverseTimeBreaker or ProtectiveDevice.DualElementFuse or ProtectiveDevice.NonTimeDelayFuse)) return false;
+        if (Get(motor, m => m.ManualStart) is null || !LikeFlag(motor, m => m.Portable) || !LikeFlag(motor, m => m.WithinSight)) return false;
+        r.SmallMotorCircuitAllowance = Result<decimal>.Of(20m, Step.Amps("120 V branch circuit", 20m, "NEC 430.32(D)(2)(a) Exception",
+            "1 hp or less, manually started, not permanently installed, within sight from the controller: permitted on a nominal 120 V branch circuit protected at not over 20 A"));
+        return true;
     }
 
     /// <summary>A 'manual-start' word read along the like chain, from the motor whose 'manual-start' line is used.</summary>

@@ -310,6 +310,8 @@ internal sealed partial class MotorSizer(MotorList model, EditBuilder edits, Lis
         }
 
         var value = rating.Value.Value;
+        if (value > max && SmallMotorOnTwentyAmpCircuit(motor, r, value, driveCapped))
+            return;
         if (value > max)
         {
             var rule = windings is not null ? "NEC 430.4" : driveCapped ? "the drive's marking or instructions (NEC 430.130(A)(2))" : MaximumRule(r.Device, hardStart);
