@@ -13,10 +13,7 @@ public class EmacsTests
     [SkippableFact]
     public async Task TheReadmeSnippetStartsEglotWithDiagnosticsAndHover()
     {
-        var emacs = FindOnPath("emacs");
-        var inCi = Environment.GetEnvironmentVariable("CI") == "true";
-        Skip.If(emacs is null && !inCi, "Emacs is not installed (apt-get install emacs-nox elpa-eglot); .ci/run installs it");
-        Assert.True(emacs is not null, "CI must have Emacs: .ci/run installs it");
+        var emacs = EditorClients.Require("emacs", "emacs-nox elpa-eglot");
 
         var dir = Directory.CreateTempSubdirectory("motorlang-emacs-").FullName;
         try
@@ -25,19 +22,14 @@ public class EmacsTests
             var file = Path.Combine(lists, "shop.motors");
             File.Copy(Path.Combine(Fixture.Root, "examples", "cabinet-shop.motors"), file);
             var snippet = Path.Combine(dir, "motorlang.el");
-            File.WriteAllText(snippet, ReadmeSnippet());
-            // The snippet runs `motorlang` from PATH: here the built server, as the README's Install puts it there.
-            var bin = Directory.CreateDirectory(Path.Combine(dir, "bin")).FullName;
-            var wrapper = Path.Combine(bin, "motorlang");
-            File.WriteAllText(wrapper, $"#!/bin/sh\nexec dotnet exec '{Path.Combine(AppContext.BaseDirectory, "motorlang.dll")}' \"$@\"\n");
-            File.SetUnixFileMode(wrapper, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute);
+            File.WriteAllText(snippet, EditorClients.ReadmeSnippet("**Emacs**", "```elisp"));
             var output = Path.Combine(dir, "out.txt");
             var info = new ProcessStartInfo(emacs!, ["--batch", "-Q", "-l", Path.Combine(AppContext.BaseDirectory, "Emacs", "readme.el")])
             {
                 RedirectStandardOutput = true, RedirectStandardError = true, RedirectStandardInput = true, UseShellExecute = false,
                 WorkingDirectory = dir,
             };
-            info.Environment["PATH"] = bin + ":" + Environment.GetEnvironmentVariable("PATH");
+            info.Environment["PATH"] = EditorClients.PathWithMotorlang(dir);
             info.Environment["HOME"] = dir; // no user init or package state leaks in
             info.Environment["MOTORLANG_SNIPPET"] = snippet;
             info.Environment["MOTORLANG_FILE"] = file;
@@ -65,17 +57,4 @@ public class EmacsTests
             Directory.Delete(dir, recursive: true);
         }
     }
-
-    /// <summary>The first ```elisp block after the README's "**Emacs**" paragraph, exactly as written.</summary>
-    private static string ReadmeSnippet()
-    {
-        var readme = File.ReadAllText(Path.Combine(Fixture.Root, "README.md"));
-        var at = readme.IndexOf("**Emacs**", StringComparison.Ordinal);
-        Assert.True(at >= 0, "README has no Emacs set-up");
-        var start = readme.IndexOf("```elisp\n", at, StringComparison.Ordinal) + "```elisp\n".Length;
-        return readme[start..readme.IndexOf("```", start, StringComparison.Ordinal)];
-    }
-
-    private static string? FindOnPath(string name) =>
-        (Environment.GetEnvironmentVariable("PATH") ?? "").Split(':').Select(d => Path.Combine(d, name)).FirstOrDefault(File.Exists);
 }

@@ -13,10 +13,7 @@ public class NeovimTests
     [SkippableFact]
     public async Task NeovimSeesTheDiagnosticsAndTheHover()
     {
-        var nvim = FindOnPath("nvim");
-        var inCi = Environment.GetEnvironmentVariable("CI") == "true";
-        Skip.If(nvim is null && !inCi, "Neovim is not installed (apt-get install neovim); .ci/run installs it");
-        Assert.True(nvim is not null, "CI must have Neovim: .ci/run installs it");
+        var nvim = EditorClients.Require("nvim", "neovim");
 
         var dir = Directory.CreateTempSubdirectory("motorlang-nvim-").FullName;
         try
@@ -52,23 +49,10 @@ public class NeovimTests
         }
     }
 
-    /// <summary>The first ```lua block after the README's "**Neovim**" paragraph, exactly as written.</summary>
-    private static string ReadmeSnippet()
-    {
-        var readme = File.ReadAllText(Path.Combine(Fixture.Root, "README.md"));
-        var at = readme.IndexOf("**Neovim**", StringComparison.Ordinal);
-        Assert.True(at >= 0, "README has no Neovim set-up");
-        var start = readme.IndexOf("```lua\n", at, StringComparison.Ordinal) + "```lua\n".Length;
-        return readme[start..readme.IndexOf("```", start, StringComparison.Ordinal)];
-    }
-
     [SkippableFact]
     public async Task TheReadmeSnippetSetsUpMotorListsAndStartsOneServerPerFolder()
     {
-        var nvim = FindOnPath("nvim");
-        var inCi = Environment.GetEnvironmentVariable("CI") == "true";
-        Skip.If(nvim is null && !inCi, "Neovim is not installed (apt-get install neovim); .ci/run installs it");
-        Assert.True(nvim is not null, "CI must have Neovim: .ci/run installs it");
+        var nvim = EditorClients.Require("nvim", "neovim");
 
         var dir = Directory.CreateTempSubdirectory("motorlang-nvim-readme-").FullName;
         try
@@ -79,18 +63,13 @@ public class NeovimTests
             var second = Path.Combine(lists, "shop-2.motors");
             File.Copy(Path.Combine(Fixture.Root, "examples", "cabinet-shop.motors"), second);
             var snippet = Path.Combine(dir, "motorlang.lua");
-            File.WriteAllText(snippet, ReadmeSnippet());
-            // The snippet runs `motorlang` from PATH: here the built server, as the README's Install puts it there.
-            var bin = Directory.CreateDirectory(Path.Combine(dir, "bin")).FullName;
-            var wrapper = Path.Combine(bin, "motorlang");
-            File.WriteAllText(wrapper, $"#!/bin/sh\nexec dotnet exec '{Path.Combine(AppContext.BaseDirectory, "motorlang.dll")}' \"$@\"\n");
-            File.SetUnixFileMode(wrapper, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute);
+            File.WriteAllText(snippet, EditorClients.ReadmeSnippet("**Neovim**", "```lua"));
             var output = Path.Combine(dir, "out.txt");
             var info = new ProcessStartInfo(nvim!, ["--headless", "--noplugin", "-u", "NONE", "-c", $"luafile {Path.Combine(AppContext.BaseDirectory, "Neovim", "readme.lua")}"])
             {
                 RedirectStandardOutput = true, RedirectStandardError = true, RedirectStandardInput = true, UseShellExecute = false,
             };
-            info.Environment["PATH"] = bin + ":" + Environment.GetEnvironmentVariable("PATH");
+            info.Environment["PATH"] = EditorClients.PathWithMotorlang(dir);
             info.Environment["MOTORLANG_SNIPPET"] = snippet;
             info.Environment["MOTORLANG_FILE"] = file;
             info.Environment["MOTORLANG_SECOND"] = second;
@@ -113,7 +92,4 @@ public class NeovimTests
             Directory.Delete(dir, recursive: true);
         }
     }
-
-    private static string? FindOnPath(string name) =>
-        (Environment.GetEnvironmentVariable("PATH") ?? "").Split(':').Select(d => Path.Combine(d, name)).FirstOrDefault(File.Exists);
 }
