@@ -1,4 +1,5 @@
 using System.Text;
+using MotorLang.Tests.Shared;
 using CsCheck;
 using MotorLang.Analysis.Reports;
 using MotorLang.Parser;
@@ -94,8 +95,8 @@ public class IncrementalAnalysisTests
                 if (updated is null) continue;
                 Interlocked.Increment(ref incremental);
                 Assert.Equal(text, analysis.Parse.Tree.Print());
-                var expected = Describe(Analyzer.Analyze(text));
-                var actual = Describe(analysis);
+                var expected = AnalysisText.Describe(Analyzer.Analyze(text));
+                var actual = AnalysisText.Describe(analysis);
                 if (expected != actual && Environment.GetEnvironmentVariable("DUMP") is { } dump)
                     File.WriteAllText(dump, $"line {line}: {text.Split('\n')[line]}\n---\n{text}\n---\n{expected}\n---\n{actual}");
                 Assert.Equal(expected, actual);
@@ -138,7 +139,7 @@ public class IncrementalAnalysisTests
             Assert.Equal(text, parse.Tree.Print());
             if (updated is null) return;
             Interlocked.Increment(ref chained);
-            Assert.Equal(Describe(Analyzer.Analyze(text)), Describe(updated));
+            Assert.Equal(AnalysisText.Describe(Analyzer.Analyze(text)), AnalysisText.Describe(updated));
         }, iter: 600);
 
         Assert.True(chained > sessions / 2, $"only {chained} of {sessions} chains were updated");
@@ -182,10 +183,10 @@ public class IncrementalAnalysisTests
             var next = reread is null ? null : Analyzer.Update(analysis, reread);
             analysis = next ?? Analyzer.Analyze(edited);
             if (next is not null) updated++;
-            if (step % 40 == 39) Assert.Equal(Describe(Analyzer.Analyze(edited)), Describe(analysis));
+            if (step % 40 == 39) Assert.Equal(AnalysisText.Describe(Analyzer.Analyze(edited)), AnalysisText.Describe(analysis));
         }
 
-        Assert.Equal(Describe(Analyzer.Analyze(string.Join('\n', lines))), Describe(analysis));
+        Assert.Equal(AnalysisText.Describe(Analyzer.Analyze(string.Join('\n', lines))), AnalysisText.Describe(analysis));
         Assert.True(updated > 300, $"only {updated} of 400 edits were applied incrementally");
     }
 
@@ -198,7 +199,7 @@ public class IncrementalAnalysisTests
         Assert.NotNull(reread);
         var after = Analyzer.Update(before, reread!);
         Assert.NotNull(after);
-        Assert.Equal(Describe(Analyzer.Analyze(text)), Describe(after!));
+        Assert.Equal(AnalysisText.Describe(Analyzer.Analyze(text)), AnalysisText.Describe(after!));
         // Motors in untouched feeders keep their very results, except those that inherit the edited wire.
         var c1 = before.Motors.Single(m => m.Key.Tag?.Value == "C-1");
         Assert.Same(c1.Value, after!.Motors[c1.Key]);
@@ -210,12 +211,12 @@ public class IncrementalAnalysisTests
     public void AnUpdateNeverChangesThePreviousAnalysis()
     {
         var before = Analyzer.Analyze(Plant);
-        var snapshot = Describe(before);
+        var snapshot = AnalysisText.Describe(before);
         var (text, line) = Replace(Plant, "  length 200ft", "  length 900ft");   // every motor's total drop moves
         var after = Analyzer.Update(before, DocumentParser.ReparseLine(before.Parse, text, line)!);
         Assert.NotNull(after);
-        Assert.NotEqual(snapshot, Describe(after!));
-        Assert.Equal(snapshot, Describe(before));
+        Assert.NotEqual(snapshot, AnalysisText.Describe(after!));
+        Assert.Equal(snapshot, AnalysisText.Describe(before));
     }
 
     [Fact]
@@ -253,22 +254,6 @@ public class IncrementalAnalysisTests
         return (string.Join('\n', lines), index);
     }
 
-    /// <summary>Everything an analysis reports, as text: findings with fixes, then the schedule.</summary>
-    private static string Describe(AnalysisResult a)
-    {
-        var sb = new StringBuilder();
-        foreach (var f in a.Findings)
-        {
-            sb.Append($"{f.Code} {f.Severity} {f.Range} {f.Message}");
-            if (f.Fix is { } fix) sb.Append($" | {fix.Title}: {string.Join("; ", fix.Edits.Select(e => $"{e.Range} '{e.NewText}'"))}");
-            sb.Append('\n');
-        }
-
-        var schedule = Schedule.Of(a);
-        foreach (var row in schedule.Rows) sb.AppendJoin(" | ", row.Cells).Append('\n');
-        foreach (var feeder in schedule.Feeders) sb.Append(feeder).Append('\n');
-        return sb.ToString();
-    }
 
     private static string RepoRoot
     {

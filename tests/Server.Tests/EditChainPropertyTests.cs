@@ -1,4 +1,5 @@
 using System.Text;
+using MotorLang.Tests.Shared;
 using CsCheck;
 using MotorLang.Analysis;
 using MotorLang.Analysis.Editing;
@@ -125,7 +126,7 @@ public class EditChainPropertyTests
 
         Assert.InRange(maxPending, DocumentSnapshot.MaxPending, DocumentSnapshot.MaxPending + 1);
         var last = store.Get(uri)!;
-        Assert.Equal(Describe(Analyzer.Analyze(text)), Describe(last.Analysis));
+        Assert.Equal(AnalysisText.Describe(Analyzer.Analyze(text)), AnalysisText.Describe(last.Analysis));
         Assert.True(last.Updated);
     }
 
@@ -159,7 +160,7 @@ public class EditChainPropertyTests
             Interlocked.Increment(ref total);
             if (last.Updated) Interlocked.Increment(ref updated);
             Assert.Equal(text, analysis.Parse.Tree.Print());
-            Assert.Equal(Describe(fresh), Describe(analysis));
+            Assert.Equal(AnalysisText.Describe(fresh), AnalysisText.Describe(analysis));
             Assert.Equal(Hovers(fresh, text), Hovers(analysis, text));
         }, iter: iter);
         return (updated, total);
@@ -266,23 +267,6 @@ public class EditChainPropertyTests
             }
         }
 
-        return sb.ToString();
-    }
-
-    /// <summary>Everything an analysis reports, as text: findings with fixes, then the schedule.</summary>
-    private static string Describe(AnalysisResult a)
-    {
-        var sb = new StringBuilder();
-        foreach (var f in a.Findings)
-        {
-            sb.Append($"{f.Code} {f.Severity} {f.Range} {f.Message}");
-            if (f.Fix is { } fix) sb.Append($" | {fix.Title}: {string.Join("; ", fix.Edits.Select(e => $"{e.Range} '{e.NewText}'"))}");
-            sb.Append('\n');
-        }
-
-        var schedule = Schedule.Of(a);
-        foreach (var row in schedule.Rows) sb.AppendJoin(" | ", row.Cells).Append('\n');
-        foreach (var feeder in schedule.Feeders) sb.Append(feeder).Append('\n');
         return sb.ToString();
     }
 }
