@@ -150,7 +150,7 @@ public class ControlCircuitTests
         var r = ControlCircuits.PrimaryMaximum(150m, 480m, secondaryProtected: false);
         Assert.Equal(1.5625m, r.Value);
         Assert.Contains(r.Steps, s => s.Rule == "NEC 430.72(C)(4)");
-        Assert.Contains(r.Steps, s => s.Value == "0.94 A" && s.Rule.Contains("Table 450.3(B)"));
+        Assert.Contains(r.Steps, s => s.Value == "0.94 A" && s.Rule == "NEC 430.72(C)(2), Table 450.3(B)");
         Assert.True(1.5m <= r.Value);
     }
 

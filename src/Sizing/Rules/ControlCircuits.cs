@@ -122,7 +122,7 @@ public static class ControlCircuits
         };
         var method = secondaryProtected ? Faults.TransformerProtectionMethod.PrimaryAndSecondary : Faults.TransformerProtectionMethod.PrimaryOnly;
         var byTable = Faults.TransformerProtection.Maximum(method, primary: true, rated, fuse: false);
-        steps.AddRange(byTable.Steps.Select(s => s with { Rule = $"NEC 430.72(C)(2), {s.Rule}" }));
+        steps.AddRange(byTable.Steps.Select(s => s with { Rule = $"NEC 430.72(C)(2), {s.Rule.Replace("NFPA 70-2023 ", "", StringComparison.Ordinal)}" }));
         var limit = byTable.Value!.Value;
         if (rated < 2m)
         {
@@ -148,7 +148,7 @@ public static class ControlCircuits
         return new Result<decimal>(byTable.Value,
         [
             Step.Amps("Transformer rated secondary current", rated, "NEC 430.72(C)", $"{Format.Number(voltAmperes)} VA / {Format.Number(secondaryVolts)} V"),
-            .. byTable.Steps.Select(s => s with { Rule = $"NEC 430.72(C)(2), {s.Rule}" }),
+            .. byTable.Steps.Select(s => s with { Rule = $"NEC 430.72(C)(2), {s.Rule.Replace("NFPA 70-2023 ", "", StringComparison.Ordinal)}" }),
         ], byTable.Unavailable);
     }
 
