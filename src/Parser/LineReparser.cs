@@ -61,7 +61,7 @@ internal static class LineReparser
         if (old.Kind is LineKind.Comment or LineKind.Blank)
         {
             if (line.Tokens.Length > 0 || diagnostics.Count > 0) return null;
-            return previous with { Tree = new SyntaxTree(newText, tree.HasBom, tree.Lines.SetItem(lineIndex, line), tree.Diagnostics), Edit = null };
+            return previous with { Tree = tree.WithSameEndings(newText, tree.Lines.SetItem(lineIndex, line), tree.Diagnostics), Edit = null };
         }
 
         return ReparseStatement(previous, newText, old, line, diagnostics);
@@ -118,7 +118,7 @@ internal static class LineReparser
         var diagnostics = MergeLineDiagnostics(previous.Diagnostics, old.Index, lineDiagnostics, scanned, isHeader);
         var (newModel, edit) = Copy(model, owner, oldStatement, statement);
         var lines = previous.Tree.Lines.SetItem(old.Index, line);
-        return new ParseResult(new SyntaxTree(newText, previous.Tree.HasBom, lines, diagnostics), newModel, diagnostics) { Edit = edit };
+        return new ParseResult(previous.Tree.WithSameEndings(newText, lines, diagnostics), newModel, diagnostics) { Edit = edit };
     }
 
     /// <summary>A header keeps its tag, in the same place, so that references and duplicate checks still hold.</summary>

@@ -8,6 +8,7 @@ namespace MotorLang.Parser.Syntax;
 public sealed class SyntaxTree
 {
     private string? _text;
+    private string? _preferredLineEnding;
 
     /// <summary>A tree; <paramref name="text"/> may be null when the tree was made by re-reading one line, and is then joined from the lines when first asked for.</summary>
     internal SyntaxTree(string? text, bool hasBom, LineList lines, ImmutableArray<Diagnostic> diagnostics)
@@ -67,7 +68,15 @@ public sealed class SyntaxTree
         });
     }
 
-    /// <summary>The line ending most used in the document, for inserting new lines.</summary>
-    public string PreferredLineEnding =>
+    /// <summary>The line ending most used in the document, for inserting new lines (counted once per tree).</summary>
+    public string PreferredLineEnding => _preferredLineEnding ??=
         Lines.Count(l => l.LineEnding == "\r\n") > Lines.Count(l => l.LineEnding == "\n") ? "\r\n" : "\n";
+
+    /// <summary>
+    /// A tree of this one's lines with some contents replaced and every line ending kept (a
+    /// re-read line): the preferred line ending carries over instead of being counted again over
+    /// every line, which a fix's insertion asks for on each keystroke.
+    /// </summary>
+    internal SyntaxTree WithSameEndings(string? text, LineList lines, ImmutableArray<Diagnostic> diagnostics) =>
+        new(text, HasBom, lines, diagnostics) { _preferredLineEnding = _preferredLineEnding };
 }
