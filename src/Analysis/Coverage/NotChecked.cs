@@ -53,6 +53,8 @@ public enum Reach
     DemandFactor,
     /// <summary>Motors that have overload protection: not motor-compressors (Article 440 Part VI is not checked) or fire pumps (695.6(D)).</summary>
     MotorWithOverload,
+    /// <summary>Motors supplied through a feeder tap (<c>tap</c>, 430.28).</summary>
+    Tap,
 }
 
 /// <summary>A rule that bears on a circuit but that MotorLang does not check: the rule, what it covers (one line), and why it is left out.</summary>
@@ -128,7 +130,10 @@ public static class NotChecked
             "no 'conduit' is written, or its fill cannot be worked out (the hover shows the smallest that fits, where it can)", Reach.NoConduit),
         new("Article 430 Part XI", "motors and feeders over 1000 V: their conductors, protection and controllers",
             "MotorLang carries only the low-voltage rules and tables, so nothing on such a circuit is sized (M210)", Reach.OverThousandVolts),
-        new("430.28, 240.21(B)", "feeder taps (the 10 ft and 25 ft rules)", "not implemented: the list has no tap conductors", Reach.EveryFeeder),
+        new("240.21(B)", "feeder taps that supply a feeder or panel rather than a motor's branch device (the 10 ft, 25 ft, transformer, outside and high-bay rules)",
+            "a 'tap' is written on a motor, where 430.28 is checked; taps from feeder to feeder are not written in the list", Reach.EveryFeeder),
+        new("430.28(1), (2), Exception", "how a feeder tap is enclosed (an enclosed controller or raceway) or protected from physical damage, and the high-bay Exception for taps over 25 ft",
+            "the tap is taken to run in the list's raceway, as every conductor in it; its ampacity and length are checked", Reach.Tap),
         new("450.3", "transformer overcurrent protection beyond the limits of Table 450.3(B): its Notes 2 and 3, and Table 450.3(A) over 1000 V",
             "MotorLang checks the table's percentages and its Note 1 only", Reach.EveryFeeder),
         new("240.21(C)(1), (C)(3), (C)(4)", "secondary conductors protected by the primary device, in industrial installations, or run outside",
@@ -185,6 +190,7 @@ public static class NotChecked
         Reach.NoOverloadUnits => !motor.IsCompressor && motor.OverloadUnitsRequired is null && motor.FireService != FireServiceRole.FirePump,
         Reach.BranchGroup => motor.Motor.Feeder.BranchGroup is not null,
         Reach.MotorWithOverload => !motor.IsCompressor && motor.FireService != FireServiceRole.FirePump,
+        Reach.Tap => power?.Taps.ContainsKey(motor.Motor) == true,
         _ => false,
     }).ToList();
     }
@@ -238,6 +244,7 @@ public static class NotChecked
         Reach.BranchGroup => "circuits with `branch-group` and the motors on them",
         Reach.DemandFactor => "feeders with a `demand-factor`",
         Reach.MotorWithOverload => "every motor (not motor-compressors or fire pumps)",
+        Reach.Tap => "motors with a `tap`",
         _ => "every feeder",
     };
 }

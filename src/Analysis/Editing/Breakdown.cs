@@ -37,9 +37,12 @@ public static class Breakdown
         if (block is MotorNode motorNode && analysis.Motors.TryGetValue(motorNode, out var motor))
         {
             var whole = keyword is "motor" or "compressor";
-            var all = MotorSections(motor);
+            var dip = analysis.Power.Dips.GetValueOrDefault(motor.Motor);
+            var all = MotorSections(motor, dip is null);
+            if (dip is not null) all = all.Append(DipSection.Of(dip));
             // With no 'source' at all there is nothing to show but the reason, which the "Not checked" list gives (110.24).
             if (analysis.Power.HasSource && analysis.Power.AtController(motor.Motor) is { } bus) all = all.Concat(FaultSections.ForMotor(motor.Motor, bus));
+            if (analysis.Power.Taps.GetValueOrDefault(motor.Motor) is { } tap) all = all.Append(TapSection.Of(tap));
             var sections = whole ? all.ToList() : all.Where(s => Belongs(s.Heading, keyword)).ToList();
             if (sections.Count == 0)
             {
@@ -101,6 +104,8 @@ public static class Breakdown
         "conduit" or "raceway" => heading == "Conduit",
         "code-letter" or "design" => heading == "Locked-rotor current",
         "sccr" or "interrupting" => heading.StartsWith(FaultSections.Heading, StringComparison.Ordinal),
+        "tap" => heading == TapSection.Heading,
+        "dip-limit" => heading == DipSection.Heading,
         _ => true,
     };
 
@@ -126,7 +131,8 @@ public static class Breakdown
     }
 
     /// <summary>A motor's whole calculation, section by section (the hover on its header; the report's calculation sheet).</summary>
-    public static IEnumerable<BreakdownSection> MotorSections(MotorResult m)
+    /// <param name="branchStartingDrop">False where the starting dip from the system's impedance replaces the branch-only starting drop.</param>
+    public static IEnumerable<BreakdownSection> MotorSections(MotorResult m, bool branchStartingDrop = true)
     {
         yield return new BreakdownSection(m.IsCompressor ? CompressorCurrent : "Full-load current", m.FullLoadCurrent.Steps, m.FullLoadCurrent.Unavailable);
         if (m.RequiredAmpacity is { } req)
@@ -181,7 +187,7 @@ public static class Breakdown
         if (m.Disconnect is { } d) yield return new BreakdownSection("Disconnecting means", d.Steps, d.Unavailable);
         if (m.Controller is { } c) yield return new BreakdownSection("Controller", c.Steps.Concat(m.NemaStarter?.Steps ?? []).ToList());
         if (m.BranchDrop is { } vd)
-            yield return new BreakdownSection("Voltage drop", vd.Steps.Concat(m.StartingDrop?.Steps ?? []).ToList(),
+            yield return new BreakdownSection("Voltage drop", vd.Steps.Concat(branchStartingDrop ? m.StartingDrop?.Steps ?? [] : []).ToList(),
                 m.TotalDropPercent is { } total ? $"feeders and branch together: {total:0.##} %" : null);
         if (m.FirePumpVoltage is { } fpv)
             yield return new BreakdownSection(FirePumpVoltageHeading, fpv.Steps, fpv.Unavailable ?? (fpv.Value is { } v

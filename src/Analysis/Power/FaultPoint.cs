@@ -15,8 +15,11 @@ public sealed class FaultPoint
     private readonly FaultPoint? _upstream;
     private readonly ImmutableArray<Step> _own;
 
-    internal FaultPoint(string name, decimal volts, Impedance impedance, FaultPoint? upstream, ImmutableArray<Step> own, decimal runningMotorAmps)
+    internal FaultPoint(string name, decimal volts, Impedance impedance, FaultPoint? upstream, ImmutableArray<Step> own, decimal runningMotorAmps,
+        Impedance? dipImpedance = null, string? dipGap = null)
     {
+        DipImpedance = dipImpedance ?? impedance;
+        DipGap = dipGap;
         Name = name;
         Volts = volts;
         Impedance = impedance;
@@ -60,6 +63,15 @@ public sealed class FaultPoint
     public decimal? MotorAmps { get; }
 
     public decimal? XOverR => Bolted.HasValue ? Impedance.XOverR : null;
+
+    /// <summary>
+    /// The impedance from the source read for a starting dip: the readings that overstate the fault
+    /// current understate a dip, so EMT takes Table 9's steel column here, as the voltage-drop check does.
+    /// </summary>
+    public Impedance DipImpedance { get; }
+
+    /// <summary>An element on the way taken as no impedance (a missing length or wire, a transformer's primary conductors): a dip worked out from here is then only a lower bound.</summary>
+    public string? DipGap { get; }
 
     public bool Computed => Bolted.HasValue;
 

@@ -4,7 +4,9 @@ using MotorLang.Analysis.Resolution;
 using MotorLang.Analysis.Sizing;
 using MotorLang.Domain;
 using MotorLang.Parser.Model;
+using MotorLang.Parser.Statements;
 using MotorLang.Sizing;
+using MotorLang.Sizing.Rules;
 using MotorLang.Sizing.Rules.Faults;
 
 namespace MotorLang.Analysis.Power;
@@ -28,15 +30,18 @@ public sealed record FeederFault(FeederNode Feeder, FaultPoint Supply, FaultPoin
 /// </summary>
 public sealed class FaultStudy
 {
-    private FaultStudy(FaultPoint? service, Dictionary<FeederNode, FeederFault> feeders, ImmutableArray<Finding> findings, bool hasSource)
+    private FaultStudy(FaultPoint? service, Dictionary<FeederNode, FeederFault> feeders, ImmutableArray<Finding> findings, bool hasSource,
+        Dictionary<MotorNode, TapResult> taps, Dictionary<MotorNode, StartingDipResult> dips)
     {
+        Taps = taps;
+        Dips = dips;
         HasSource = hasSource;
         Service = service;
         Feeders = feeders;
         Findings = findings;
     }
 
-    public static readonly FaultStudy Empty = new(null, [], [], false);
+    public static readonly FaultStudy Empty = new(null, [], [], false, [], []);
 
     /// <summary>The project writes a 'source' (its values may still be incomplete).</summary>
     public bool HasSource { get; }
@@ -48,13 +53,23 @@ public sealed class FaultStudy
 
     public ImmutableArray<Finding> Findings { get; }
 
+    /// <summary>Every motor with a feeder tap ('tap'), and what 430.28 asks of it.</summary>
+    public IReadOnlyDictionary<MotorNode, TapResult> Taps { get; }
+
+    /// <summary>Every three-phase motor's starting dip at its bus and terminals (a list with a 'source' only).</summary>
+    public IReadOnlyDictionary<MotorNode, StartingDipResult> Dips { get; }
+
     /// <summary>At a motor's controller: its feeder's bus (the controller is taken to stand in the MCC).</summary>
     public FaultPoint? AtController(MotorNode motor) => Feeders.GetValueOrDefault(motor.Feeder)?.Bus;
 
     public static FaultStudy Run(MotorList model, IReadOnlyDictionary<MotorNode, MotorResult> motors, IReadOnlyDictionary<FeederNode, FeederResult> feeders)
     {
         var builder = new StudyBuilder(model, motors, feeders);
-        return new FaultStudy(builder.Service, builder.Results, [.. builder.Findings], model.Project?.Source is not null);
+        // Feeder taps (430.28) need the motors' and the feeders' sizing both, as the fault study does: they run in the same pass.
+        var taps = FeederTapChecks.Run(model, motors, feeders, builder.Findings);
+        // The starting dip reads the system impedance the study found, so only a list with a 'source' has one.
+        var dips = builder.Service is null ? [] : StartingDips.Run(model, motors, m => builder.Results.GetValueOrDefault(m.Feeder)?.Bus, builder.Findings);
+        return new FaultStudy(builder.Service, builder.Results, [.. builder.Findings], model.Project?.Source is not null, taps, dips);
     }
 
     private sealed class StudyBuilder
@@ -183,9 +198,13 @@ public sealed class FaultStudy
 
             var steps = ImmutableArray.CreateBuilder<Step>();
             var z = supply.Impedance;
+            var dip = supply.DipImpedance;
+            var gap = supply.DipGap;
             if (f.Transformer is not null)
             {
                 var vp = f.TransformerPrimary!.Value.Value;
+                dip = dip.Referred(vp, volts);
+                gap ??= $"{f.Tag?.Value}'s transformer primary conductors are not in the list";
                 if (z != Impedance.Zero)
                 {
                     z = z.Referred(vp, volts);
@@ -195,11 +214,15 @@ public sealed class FaultStudy
 
                 var zt = FaultCurrent.Transformer(f.TransformerRating!.Value.Value, f.TransformerImpedance!.Value.Value, f.TransformerXOverR!.Value.Value, volts);
                 z += zt.Value!.Value;
+                dip += zt.Value!.Value;
                 steps.AddRange(zt.Steps);
             }
 
             z += Conductors(f, steps);
-            var bus = new FaultPoint(Name(f), volts, z, supply, steps.ToImmutable(), RunningAmps(volts));
+            var (dipConductors, dipGap) = DipConductors(f);
+            dip += dipConductors;
+            gap ??= dipGap;
+            var bus = new FaultPoint(Name(f), volts, z, supply, steps.ToImmutable(), RunningAmps(volts), dip, gap);
             return new FeederFault(f, supply, bus, transformer);
         }
 
@@ -226,6 +249,18 @@ public sealed class FaultStudy
 
             steps.AddRange(zc.Steps);
             return z;
+        }
+
+        /// <summary>The feeder's conductors as a starting dip reads them (EMT as steel conduit), or why they count as none.</summary>
+        private (Impedance, string?) DipConductors(FeederNode f)
+        {
+            // A feeder at the source with no length is where the source's kA is stated: nothing is missing there.
+            if (f.Length is not { } length || f.Wire is not { } wire)
+                return (Impedance.Zero, f.From is null && f.Length is null ? null : $"{f.Tag?.Value} writes no {(f.Length is null ? "'length'" : "'wire'")}");
+            var settings = Settings.For(f, _model);
+            var raceway = settings.Raceway == RacewayType.Emt ? RacewayType.Rmc : settings.Raceway;
+            var zc = FaultCurrent.Conductor(wire.Value, Conversions.Feet(length.Value), settings.Material, raceway);
+            return zc.Value is { } z ? (z, null) : (Impedance.Zero, $"{f.Tag?.Value}'s conductors: {zc.Unavailable}");
         }
 
         private TransformerFacts? TransformerOf(FeederNode f)
@@ -270,10 +305,12 @@ public sealed class FaultStudy
             if (fault.Transformer is not { Method: { } method } t) return;
             if (t.PrimaryMaximum?.Value is { } pmax && f.PrimaryProtectionRating is { } pr && pr.Value.Value > pmax)
                 Findings.Add(new Finding(FindingCodes.TransformerPrimaryTooLarge, Parser.Diagnostics.Severity.Error, pr.Range,
-                    $"primary device {Format.Amps(pr.Value.Value)} is above the {Format.Amps(pmax)} Table 450.3(B) permits ({TransformerProtection.Name(method)} protection, {Format.Amps(decimal.Round(t.PrimaryAmps, 1))} rated primary current)"));
+                    $"primary device {Format.Amps(pr.Value.Value)} is above the {Format.Amps(pmax)} Table 450.3(B) permits ({TransformerProtection.Name(method)} protection, {Format.Amps(decimal.Round(t.PrimaryAmps, 1))} rated primary current)",
+                    LargestStandard(f.Statement("primary-protection"), f.PrimaryProtection?.Value, pmax, "primary device")));
             if (t.SecondaryMaximum?.Value is { } smax && f.ProtectionRating is { } sr && sr.Value.Value > smax)
                 Findings.Add(new Finding(FindingCodes.TransformerSecondaryTooLarge, Parser.Diagnostics.Severity.Error, sr.Range,
-                    $"secondary device {Format.Amps(sr.Value.Value)} is above the {Format.Amps(smax)} Table 450.3(B) permits ({Format.Amps(decimal.Round(t.SecondaryAmps, 1))} rated secondary current)"));
+                    $"secondary device {Format.Amps(sr.Value.Value)} is above the {Format.Amps(smax)} Table 450.3(B) permits ({Format.Amps(decimal.Round(t.SecondaryAmps, 1))} rated secondary current)",
+                    LargestStandard(f.Statement("protection"), f.Protection?.Value, smax, "secondary device")));
             if (t.Secondary is not { } sc) return;
             if (sc.TooLong && f.Length is { } length)
                 Findings.Add(new Finding(FindingCodes.SecondaryConductorsTooLong, Parser.Diagnostics.Severity.Warning, length.Range, sc.MinimumAmpacity.Unavailable!));
@@ -281,8 +318,27 @@ public sealed class FaultStudy
                 Findings.Add(new Finding(FindingCodes.SecondaryConductorsUnprotected, Parser.Diagnostics.Severity.Warning, f.Header.Range,
                     $"{tag}'s secondary conductors end in no 'protection' written here: {sc.Subsection} asks for an overcurrent device where they end (or, for (C)(2), equipment rated no more than their ampacity)"));
             if (sc.MinimumAmpacity.Value is { } min && _sized.GetValueOrDefault(f)?.WireAmpacity?.Value is { } ampacity && ampacity < min)
+            {
+                // The smallest conductor with that ampacity under the feeder's conditions is the one right size.
+                var size = Ampacity.Minimum(min, Settings.For(f, _model).Conditions, false).Value;
+                var fix = size is { } w && f.Statement("wire")?.Arg("size") is { } arg
+                    ? new Fix($"Change the secondary conductors to {w}", [Fixes.EditBuilder.Replace(arg, w.ToString())])
+                    : null;
                 Findings.Add(new Finding(FindingCodes.SecondaryConductorsUndersized, Parser.Diagnostics.Severity.Error, f.Wire?.Range ?? f.Header.Range,
-                    $"secondary conductors of {Format.Amps(ampacity)} ampacity; {sc.Subsection} asks at least {Format.Amps(decimal.Round(min, 1))}"));
+                    $"secondary conductors of {Format.Amps(ampacity)} ampacity; {sc.Subsection} asks at least {Format.Amps(decimal.Round(min, 1))}"
+                    + (size is { } s ? $": use {s}" : ""), fix));
+            }
+        }
+
+        /// <summary>
+        /// A transformer device above its Table 450.3(B) limit: the largest standard rating (240.6(A)) at or
+        /// under the limit is the one right value (the limit itself where Note 1 already made it standard).
+        /// </summary>
+        private static Fix? LargestStandard(Statement? statement, ProtectiveDevice? device, decimal limit, string what)
+        {
+            var fuse = MotorLang.Sizing.Rules.ShortCircuitProtection.IsFuse(device ?? ProtectiveDevice.InverseTimeBreaker);
+            if (statement?.Arg("rating") is not { } arg || StandardRatings.AtOrBelow(limit, fuse) is not { } rating) return null;
+            return new Fix($"Change the {what} to {Format.Amps(rating)}", [Fixes.EditBuilder.Replace(arg, $"{Format.Number(rating)}A")]);
         }
 
         private void Check(MotorResult m)

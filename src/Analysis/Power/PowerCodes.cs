@@ -23,4 +23,20 @@ public static partial class FindingCodes
     public const string TransformerVoltageMismatch = "M508";
     /// <summary>240.21(C)(2), (C)(6): secondary conductors that end in no overcurrent device written in the list.</summary>
     public const string SecondaryConductorsUnprotected = "M509";
+    /// <summary>430.28: a feeder tap's ampacity is below what Part II asks for the motor it supplies.</summary>
+    public const string TapBelowPartTwo = "M510";
+    /// <summary>430.28(1), (2): a tap not over 10 ft meets neither the 1000 % device limit nor one third of the feeder conductors' ampacity.</summary>
+    public const string TapTenFootRule = "M511";
+    /// <summary>430.28(2): a tap over 10 ft and not over 25 ft has less than one third of the feeder conductors' ampacity.</summary>
+    public const string TapTwentyFiveFootRule = "M512";
+    /// <summary>430.28(3): a tap over 25 ft has less ampacity than the feeder conductors.</summary>
+    public const string TapOverTwentyFiveFeet = "M513";
+    /// <summary>430.28: a feeder tap that cannot be checked (the feeder's wire or device is not written, or the tap's ampacity is not known).</summary>
+    public const string TapNotChecked = "M514";
+    /// <summary>430.28: tap conductors end in a branch-circuit protective device, and the motor writes no 'protection' rating.</summary>
+    public const string TapWithoutBranchDevice = "M515";
+    /// <summary>The starting dip at the motor's terminals is above the 'dip-limit' (15 % when not written).</summary>
+    public const string StartingDipAtMotorHigh = "M516";
+    /// <summary>The starting dip at the motor's feeder bus is above the 'dip-limit' for the bus (10 % when not written).</summary>
+    public const string StartingDipAtBusHigh = "M517";
 }

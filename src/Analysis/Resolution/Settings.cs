@@ -19,14 +19,20 @@ public sealed record Settings(
     int CurrentCarrying,
     decimal BranchDropLimit,
     decimal TotalDropLimit,
-    decimal PowerFactor)
+    decimal PowerFactor,
+    decimal MotorDipLimit,
+    decimal BusDipLimit)
 {
-    /// <summary>Defaults where nothing is written: 30 °C (the table base), copper THWN (75 °C), EMT, three conductors, 3 % / 5 %, PF 0.85.</summary>
-    public static readonly Settings Defaults = new(30m, ConductorMaterial.Copper, "THWN", 75, null, RacewayType.Emt, 3, 3m, 5m, 0.85m);
+    /// <summary>
+    /// Defaults where nothing is written: 30 °C (the table base), copper THWN (75 °C), EMT, three
+    /// conductors, 3 % / 5 %, PF 0.85; a starting dip of 15 % at the motor and 10 % at its bus
+    /// (common practice, no source).
+    /// </summary>
+    public static readonly Settings Defaults = new(30m, ConductorMaterial.Copper, "THWN", 75, null, RacewayType.Emt, 3, 3m, 5m, 0.85m, 15m, 10m);
 
     public InstallationConditions Conditions => new(Material, InsulationRating, TerminationRating, AmbientCelsius, CurrentCarrying, Raceway, Insulation);
 
-    private static readonly string[] SettingKeywords = ["ambient", "conductor", "raceway", "ccc", "drop-limit", "power-factor", "code"];
+    private static readonly string[] SettingKeywords = ["ambient", "conductor", "raceway", "ccc", "drop-limit", "power-factor", "code", "dip-limit"];
 
     /// <summary>True when the block writes any installation setting of its own.</summary>
     public static bool HasOwn(BlockNode block)
@@ -91,6 +97,8 @@ public sealed record Settings(
             Pick(b => b.CurrentCarrying, d.CurrentCarrying),
             Pick(b => b.BranchDropLimit, new Quantity(d.BranchDropLimit, Unit.Percent)).Value,
             Pick(b => b.TotalDropLimit, new Quantity(d.TotalDropLimit, Unit.Percent)).Value,
-            Pick(b => b.PowerFactor, d.PowerFactor));
+            Pick(b => b.PowerFactor, d.PowerFactor),
+            Pick(b => b.MotorDipLimit, new Quantity(d.MotorDipLimit, Unit.Percent)).Value,
+            Pick(b => b.BusDipLimit, new Quantity(d.BusDipLimit, Unit.Percent)).Value);
     }
 }

@@ -105,6 +105,8 @@ public abstract class BlockNode
     public Located<Quantity>? BranchDropLimit => Get<Quantity>("drop-limit", "branch");
     public Located<Quantity>? TotalDropLimit => Get<Quantity>("drop-limit", "total");
     public Located<decimal>? PowerFactor => Get<decimal>("power-factor", "value");
+    public Located<Quantity>? MotorDipLimit => Get<Quantity>("dip-limit", "motor");
+    public Located<Quantity>? BusDipLimit => Get<Quantity>("dip-limit", "bus");
     public Located<string>? CodeEdition => Get<string>("code", "edition");
 }
 
@@ -199,6 +201,9 @@ public sealed class MotorNode(Statement header, FeederNode feeder) : CircuitNode
     public bool IsCompressor => Header.Keyword == "compressor";
     public FeederNode Feeder => feeder;
     public Located<Quantity>? Power => Get<Quantity>("motor", "power");
+    /// <summary>Feeder tap conductors from the feeder to this motor's branch device (430.28): their length and size.</summary>
+    public Located<Quantity>? TapLength => Get<Quantity>("tap", "length");
+    public Located<WireSpec>? TapWire => Get<WireSpec>("tap", "size");
     public Located<Quantity>? RatedVoltage => Get<Quantity>(Keyword, "voltage");
     public Located<Phases>? Phases => Get<Phases>(Keyword, "phases");
     public Located<Quantity>? Nameplate => Get<Quantity>("nameplate", "current");

@@ -235,6 +235,9 @@ public static class Keywords
         new("drop-limit", Settings, null,
             [new("branch", Percent, true, Check: Positive), new("total", Percent, false, Check: Positive)],
             "Voltage-drop limits that trigger a warning: branch, and feeder plus branch."),
+        new("dip-limit", Settings, null,
+            [new("motor", Percent, true, Check: Positive), new("bus", Percent, false, Check: Positive)],
+            "Starting-dip limits that trigger a warning: at the motor's terminals, and at its feeder's bus (15 % and 10 % when not written)."),
         new("power-factor", Settings, null,
             [new("value", Number, true, Check: v => v is > 0 and <= 1 ? null : "must be above 0 and at most 1")],
             "Running power factor used for voltage drop (Chapter 9 Table 9, note 2)."),
@@ -271,6 +274,8 @@ public static class Keywords
         new("interrupting", [Feeder, Motor], null, [new("rating", FaultCurrent, true, Check: Positive)],
             "Interrupting rating (kA) of this circuit's protective device."),
 
+        new("tap", [Motor], null, [new("length", Length, true, Check: Positive), new("size", Wire, true)],
+            "Feeder tap conductors from the feeder to this motor's branch-circuit protective device (430.28): their length and size, e.g. 'tap 8ft 6 AWG'."),
         new("nameplate", [Motor], null, [new("current", Current, true, Check: Positive)], "Nameplate full-load amperes (FLA), used for overloads."),
         new("service-factor", [Motor], null,
             [new("value", Number, true, Check: v => v >= 1.0m ? null : "must be at least 1.0")], "Marked service factor."),

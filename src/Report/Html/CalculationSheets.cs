@@ -36,9 +36,12 @@ public static class CalculationSheets
                 ("Protection", Labels.Protection(m.ProtectionRating, m.Device, null, null)),
                 ("Overload", m.Overload is { } o ? Format.Amps(o) : "not written"),
             ]);
-            Sections(page, analysis.Power.HasSource && analysis.Power.AtController(m.Motor) is { } bus
-                ? Breakdown.MotorSections(m).Concat(FaultSections.ForMotor(m.Motor, bus))
-                : Breakdown.MotorSections(m));
+            var dip = analysis.Power.Dips.GetValueOrDefault(m.Motor);
+            var sections = Breakdown.MotorSections(m, dip is null);
+            if (dip is not null) sections = sections.Append(DipSection.Of(dip));
+            if (analysis.Power.HasSource && analysis.Power.AtController(m.Motor) is { } bus) sections = sections.Concat(FaultSections.ForMotor(m.Motor, bus));
+            if (analysis.Power.Taps.GetValueOrDefault(m.Motor) is { } tap) sections = sections.Append(TapSection.Of(tap));
+            Sections(page, sections);
             Coverage(page, CircuitCoverage.For(m, analysis.Power));
             Findings(page, byLine, lines, m.Motor.Header.Line.Index, m.Motor.LastLine);
             page.SheetEnd();
