@@ -64,11 +64,13 @@ public sealed class FaultStudy
 
     public static FaultStudy Run(MotorList model, IReadOnlyDictionary<MotorNode, MotorResult> motors, IReadOnlyDictionary<FeederNode, FeederResult> feeders)
     {
-        var builder = new StudyBuilder(model, motors, feeders);
+        // One resolver for the pass: each motor reads attributes along its 'like' chain, remembered, so a long chain stays linear.
+        var likes = new LikeResolver(model);
+        var builder = new StudyBuilder(model, motors, feeders, likes);
         // Feeder taps (430.28) need the motors' and the feeders' sizing both, as the fault study does: they run in the same pass.
-        var taps = FeederTapChecks.Run(model, motors, feeders, builder.Findings);
+        var taps = FeederTapChecks.Run(model, likes, motors, feeders, builder.Findings);
         // The starting dip reads the system impedance the study found, so only a list with a 'source' has one.
-        var dips = builder.Service is null ? [] : StartingDips.Run(model, motors, m => builder.Results.GetValueOrDefault(m.Feeder)?.Bus, builder.Findings);
+        var dips = builder.Service is null ? [] : StartingDips.Run(model, likes, motors, m => builder.Results.GetValueOrDefault(m.Feeder)?.Bus, builder.Findings);
         return new FaultStudy(builder.Service, builder.Results, [.. builder.Findings], model.Project?.Source is not null, taps, dips);
     }
 
@@ -83,8 +85,11 @@ public sealed class FaultStudy
         private readonly string? _noSource;
         private readonly decimal _serviceVolts;
 
-        public StudyBuilder(MotorList model, IReadOnlyDictionary<MotorNode, MotorResult> motors, IReadOnlyDictionary<FeederNode, FeederResult> feeders)
+        private readonly LikeResolver _likes;
+
+        public StudyBuilder(MotorList model, IReadOnlyDictionary<MotorNode, MotorResult> motors, IReadOnlyDictionary<FeederNode, FeederResult> feeders, LikeResolver likes)
         {
+            _likes = likes;
             _model = model;
             _sized = feeders;
             // Every ac motor is counted as running and as feeding every point, with no impedance between:
@@ -345,24 +350,17 @@ public sealed class FaultStudy
         {
             if (!Results.TryGetValue(m.Motor.Feeder, out var fault)) return;
             var tag = m.Tag;
-            if (Own(m.Motor, n => n.Interrupting) is { } ir)
+            if (Own(m.Motor, static n => n.Interrupting) is { } ir)
                 CheckRating(ir, fault.Bus, FindingCodes.InterruptingTooLow, $"{tag}'s branch protective device: interrupting rating", "110.9");
-            if (Own(m.Motor, n => n.Sccr) is { } sccr)
+            if (Own(m.Motor, static n => n.Sccr) is { } sccr)
                 CheckRating(sccr, fault.Bus, FindingCodes.ControllerSccrTooLow,
                     $"{tag}'s {(m.StartingMethod == StartingMethod.Drive ? "drive" : "controller")}: short-circuit current rating", "110.10, 430.8");
         }
 
-        /// <summary>A rating on the motor or, through 'like', on the motor it copies (a bounded walk: cycles are P016).</summary>
-        private Located<Parser.Values.Quantity>? Own(MotorNode motor, Func<MotorNode, Located<Parser.Values.Quantity>?> get)
-        {
-            var seen = new HashSet<MotorNode>();
-            for (MotorNode? m = motor; m is not null && seen.Add(m); m = m.Like is { } like ? _model.Find(like.Value) as MotorNode : null)
-            {
-                if (get(m) is { } found) return m == motor ? found : new Located<Parser.Values.Quantity>(found.Value, motor.Like!.Range);
-            }
-
-            return null;
-        }
+        /// <summary>A rating on the motor or, through 'like', on the motor it copies (then placed on the 'like' line).</summary>
+        private Located<Parser.Values.Quantity>? Own(MotorNode motor, Func<MotorNode, Located<Parser.Values.Quantity>?> get) =>
+            _likes.Get(motor, get) is not { } found ? null
+            : found.Owner == motor ? found.Value : new Located<Parser.Values.Quantity>(found.Value.Value, motor.Like!.Range);
 
         private void CheckRating(Located<Parser.Values.Quantity> rating, FaultPoint at, string code, string what, string rule)
         {

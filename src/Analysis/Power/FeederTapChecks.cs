@@ -22,26 +22,26 @@ public sealed record TapResult(MotorNode Motor, decimal LengthFeet, WireSpec Wir
 /// </summary>
 internal static class FeederTapChecks
 {
-    public static Dictionary<MotorNode, TapResult> Run(MotorList model, IReadOnlyDictionary<MotorNode, MotorResult> motors,
+    public static Dictionary<MotorNode, TapResult> Run(MotorList model, LikeResolver likes, IReadOnlyDictionary<MotorNode, MotorResult> motors,
         IReadOnlyDictionary<FeederNode, FeederResult> feeders, List<Finding> findings)
     {
         var taps = new Dictionary<MotorNode, TapResult>();
         foreach (var m in motors.Values)
         {
-            if (Likes.Get(m.Motor, model, n => n.TapLength) is not { } length || Likes.Get(m.Motor, model, n => n.TapWire) is not { } wire) continue;
+            if (likes.Get(m.Motor, static n => n.TapLength) is not { } length || likes.Get(m.Motor, static n => n.TapWire) is not { } wire) continue;
             var own = wire.Owner == m.Motor;
             var at = own ? wire.Value.Range : m.Motor.Like!.Range;
-            var tap = Check(m, model, feeders.GetValueOrDefault(m.Motor.Feeder), Conversions.Feet(length.Value.Value), wire.Value.Value);
+            var conditions = Settings.For(m.Motor, model, likes).Conditions;
+            var tap = Check(m, conditions, feeders.GetValueOrDefault(m.Motor.Feeder), Conversions.Feet(length.Value.Value), wire.Value.Value);
             taps[m.Motor] = tap;
-            Report(tap, m, model, at, own, findings);
+            Report(tap, m, conditions, at, own, findings);
         }
 
         return taps;
     }
 
-    private static TapResult Check(MotorResult m, MotorList model, FeederResult? feeder, decimal feet, WireSpec wire)
+    private static TapResult Check(MotorResult m, InstallationConditions conditions, FeederResult? feeder, decimal feet, WireSpec wire)
     {
-        var conditions = Settings.For(m.Motor, model).Conditions;
         // Tap conductors end at a branch device, not at the motor: the 110.14(C) allowance for design B-D motor terminals is not theirs.
         var ampacity = Ampacity.Allowable(wire, conditions, false);
         TapResult Unchecked(string why) => new(m.Motor, feet, wire, ampacity, null, why);
@@ -53,7 +53,7 @@ internal static class FeederTapChecks
         return new TapResult(m.Motor, feet, wire, ampacity, check, null);
     }
 
-    private static void Report(TapResult tap, MotorResult m, MotorList model, SourceRange at, bool own, List<Finding> findings)
+    private static void Report(TapResult tap, MotorResult m, InstallationConditions conditions, SourceRange at, bool own, List<Finding> findings)
     {
         var tag = m.Tag;
         if (m.ProtectionRating is null)
@@ -87,8 +87,7 @@ internal static class FeederTapChecks
             : tap.LengthFeet <= 10 ? (FindingCodes.TapTenFootRule, "a tap not over 10 ft needs the feeder's device at most 1000 % of its ampacity (430.28(1)) or one third of the feeder conductors' ampacity (430.28(2))")
             : tap.LengthFeet <= 25 ? (FindingCodes.TapTwentyFiveFootRule, "a tap over 10 ft and not over 25 ft needs one third of the feeder conductors' ampacity (430.28(2))")
             : (FindingCodes.TapOverTwentyFiveFeet, "a tap over 25 ft needs the feeder conductors' ampacity (430.28(3); the high-bay Exception is not applied)");
-        var settings = Settings.For(m.Motor, model);
-        var wire = Ampacity.Minimum(minimum, settings.Conditions, false).Value;
+        var wire = Ampacity.Minimum(minimum, conditions, false).Value;
         var fix = own && wire is { } w && tap.Motor.Statement("tap")?.Arg("size") is { } arg
             ? new Fix($"Change the tap conductors to {w}", [Fixes.EditBuilder.Replace(arg, w.ToString())])
             : null;

@@ -23,16 +23,16 @@ public sealed record StartingDipResult(MotorNode Motor, Result<Dip> Dip, string?
 /// </summary>
 internal static class StartingDips
 {
-    public static Dictionary<MotorNode, StartingDipResult> Run(MotorList model, IReadOnlyDictionary<MotorNode, MotorResult> motors,
+    public static Dictionary<MotorNode, StartingDipResult> Run(MotorList model, LikeResolver likes, IReadOnlyDictionary<MotorNode, MotorResult> motors,
         Func<MotorNode, FaultPoint?> bus, List<Finding> findings)
     {
         var dips = new Dictionary<MotorNode, StartingDipResult>();
         foreach (var m in motors.Values)
         {
             if (m.Phases != Phases.Three || bus(m.Motor) is not { Known: true, Volts: > 0 } at) continue;
-            if (StartingCurrent(m, model) is not { } start) continue;
-            var settings = Settings.For(m.Motor, model);
-            var (branch, gap) = Branch(m, model, settings);
+            if (StartingCurrent(m, likes) is not { } start) continue;
+            var settings = Settings.For(m.Motor, model, likes);
+            var (branch, gap) = Branch(m, likes, settings);
             gap = at.DipGap ?? gap;
             var ratedVolts = m.RatedVolts > 0 ? m.RatedVolts : m.Volts;
             var dip = StartingDip.Of(at.DipImpedance, branch, start.Amps, at.Volts, ratedVolts, m.Phases);
@@ -45,21 +45,22 @@ internal static class StartingDips
     }
 
     /// <summary>The starting line current: the nameplate locked-rotor current, else the code letter's upper end (Table 430.7(B)), else the Table 430.251 maximum, times the starter's factor; a drive's about 150 % of its input.</summary>
-    private static (decimal Amps, ImmutableArray<Step> Steps)? StartingCurrent(MotorResult m, MotorList model)
+    private static (decimal Amps, ImmutableArray<Step> Steps)? StartingCurrent(MotorResult m, LikeResolver likes)
     {
         if (m.StartingMethod == StartingMethod.Drive)
         {
-            var input = Likes.Get(m.Motor, model, n => n.DriveInputCurrent)?.Value.Value.Value ?? m.FullLoadCurrent.Value;
+            var written = likes.Get(m.Motor, static n => n.DriveInputCurrent);
+            var input = written?.Value.Value.Value ?? m.FullLoadCurrent.Value;
             if (input is not { } i) return null;
             var amps = StartingDip.DriveStartingMultiple * i;
             return (amps, [Step.Amps("Starting current", amps, "common practice, no source",
-                $"a drive starts its motor at about {Format.Number(StartingDip.DriveStartingMultiple * 100)} % of {Format.Amps(i)} ({(Likes.Get(m.Motor, model, n => n.DriveInputCurrent) is null ? "the motor's full-load current: no drive input current is written" : "the drive's rated input current")}), not at locked-rotor current")]);
+                $"a drive starts its motor at about {Format.Number(StartingDip.DriveStartingMultiple * 100)} % of {Format.Amps(i)} ({(written is null ? "the motor's full-load current: no drive input current is written" : "the drive's rated input current")}), not at locked-rotor current")]);
         }
 
         decimal? lra = null;
         var source = "";
-        if (Likes.Get(m.Motor, model, n => n.LockedRotorCurrent) is { } written)
-            (lra, source) = (written.Value.Value.Value, "the nameplate locked-rotor current ('locked-rotor')");
+        if (likes.Get(m.Motor, static n => n.LockedRotorCurrent) is { } nameplate)
+            (lra, source) = (nameplate.Value.Value.Value, "the nameplate locked-rotor current ('locked-rotor')");
         else if (m.LockedRotorFromCodeLetter?.Value is { } range)
             (lra, source) = (range.Maximum ?? range.Minimum, "the upper end of the code letter's kVA per horsepower at rated voltage, NFPA 70-2023 Table 430.7(B)");
         else if (m.LockedRotorTableMaximum?.Value is { } table)
@@ -74,9 +75,9 @@ internal static class StartingDips
     }
 
     /// <summary>The branch conductors as the voltage-drop check reads them (EMT as steel conduit), or why they count as none.</summary>
-    private static (Impedance, string?) Branch(MotorResult m, MotorList model, Settings settings)
+    private static (Impedance, string?) Branch(MotorResult m, LikeResolver likes, Settings settings)
     {
-        var length = Likes.Get(m.Motor, model, n => n.Length)?.Value.Value;
+        var length = likes.Get(m.Motor, static n => n.Length)?.Value.Value;
         var wire = m.Wire ?? m.MinimumWire?.Value;
         if (length is null || wire is null) return (Impedance.Zero, $"{m.Tag} writes no {(length is null ? "'length'" : "'wire'")}");
         var raceway = settings.Raceway == RacewayType.Emt ? RacewayType.Rmc : settings.Raceway;
