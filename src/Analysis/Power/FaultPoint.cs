@@ -16,8 +16,10 @@ public sealed class FaultPoint
     private readonly ImmutableArray<Step> _own;
 
     internal FaultPoint(string name, decimal volts, Impedance impedance, FaultPoint? upstream, ImmutableArray<Step> own, decimal runningMotorAmps,
-        Impedance? dipImpedance = null, string? dipGap = null)
+        Impedance? dipImpedance = null, string? dipGap = null, bool singlePhase = false, bool belowSinglePhaseTransformer = false)
     {
+        SinglePhase = singlePhase;
+        BelowSinglePhaseTransformer = belowSinglePhaseTransformer;
         DipImpedance = dipImpedance ?? impedance;
         DipGap = dipGap;
         Name = name;
@@ -26,7 +28,7 @@ public sealed class FaultPoint
         _upstream = upstream;
         _own = own;
         Known = true;
-        var bolted = FaultCurrent.Bolted(name, volts, impedance);
+        var bolted = singlePhase ? FaultCurrent.BoltedLineToLine(name, volts, impedance) : FaultCurrent.Bolted(name, volts, impedance);
         if (bolted.Value is not { } amps)
         {
             Bolted = new Result<decimal>(null, [.. Path(), .. bolted.Steps], bolted.Unavailable);
@@ -36,7 +38,9 @@ public sealed class FaultPoint
 
         Bolted = Result<decimal>.Deferred(amps, () => [.. Path(), .. bolted.Steps]);
         MotorAmps = FaultCurrent.MotorContributionMultiple * runningMotorAmps;
-        var with = FaultCurrent.MotorContribution(runningMotorAmps, amps);
+        var with = belowSinglePhaseTransformer
+            ? FaultCurrent.MotorContributionBelowSinglePhase(runningMotorAmps, amps)
+            : FaultCurrent.MotorContribution(runningMotorAmps, amps);
         WithMotors = Result<decimal>.Deferred(with.Value!.Value, () => [.. Bolted.Steps, .. with.Steps]);
     }
 
@@ -50,6 +54,12 @@ public sealed class FaultPoint
     }
 
     public string Name { get; }
+
+    /// <summary>A single-phase point: <see cref="Impedance"/> is the loop impedance and <see cref="Bolted"/> the line-to-line fault current.</summary>
+    public bool SinglePhase { get; }
+
+    /// <summary>Below a single-phase transformer: ratings are held to the line-to-neutral bound (1.5 × line to line) plus the motors.</summary>
+    public bool BelowSinglePhaseTransformer { get; }
     public decimal Volts { get; }
     public Impedance Impedance { get; }
 

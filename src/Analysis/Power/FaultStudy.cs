@@ -186,7 +186,10 @@ public sealed class FaultStudy
             var volts = f.Voltage?.Value.Value ?? 0;
             string? why = null;
             if (!supply.Known) why = $"not worked out where it is supplied: {supply.Bolted.Unavailable}";
-            else if (f.Phases?.Value != Phases.Three) why = "only the three-phase fault current is worked out; single-phase (line to line, line to neutral) and dc are not implemented";
+            else if (f.Phases?.Value is not (Phases.Three or Phases.Single)) why = "dc fault current is not worked out";
+            else if (f.Phases?.Value == Phases.Three && supply.SinglePhase) why = "a three-phase feeder supplied from a single-phase bus";
+            else if (f.Phases?.Value == Phases.Single && f.From is null)
+                why = "a single-phase feeder at the source: the source's kA is read as three-phase, so its line-to-line value is not worked out";
             else if (f.Transformer is not null && (f.TransformerRating is null || f.TransformerPrimary is null || f.TransformerSecondary is null))
                 why = "the transformer line lacks its kVA or its voltages";
             else if (f.Transformer is not null && f.TransformerImpedance is null) why = "the transformer has no %Z written";
@@ -205,6 +208,16 @@ public sealed class FaultStudy
             var z = supply.Impedance;
             var dip = supply.DipImpedance;
             var gap = supply.DipGap;
+            // Single phase, line to line: the loop impedance. Taken off a three-phase bus, two of its phases are in the loop.
+            var single = f.Phases?.Value == Phases.Single;
+            if (single && !supply.SinglePhase)
+            {
+                z = Twice(z);
+                dip = Twice(dip);
+                steps.Add(new Step("Two phases in the loop", z.ToString(), FaultCurrent.MethodReference,
+                    $"line to line from the three-phase bus: 2 × the impedance to {supply.Name} per phase"));
+            }
+
             if (f.Transformer is not null)
             {
                 var vp = f.TransformerPrimary!.Value.Value;
@@ -223,13 +236,23 @@ public sealed class FaultStudy
                 steps.AddRange(zt.Steps);
             }
 
-            z += Conductors(f, steps);
+            var conductors = Conductors(f, steps);
+            if (single && conductors != Impedance.Zero)
+            {
+                conductors = Twice(conductors);
+                steps.Add(new Step("Conductor loop", conductors.ToString(), FaultCurrent.MethodReference, "single phase: out and back, 2 × the one-way impedance"));
+            }
+
+            z += conductors;
             var (dipConductors, dipGap) = DipConductors(f);
-            dip += dipConductors;
+            dip += single ? Twice(dipConductors) : dipConductors;
             gap ??= dipGap;
-            var bus = new FaultPoint(Name(f), volts, z, supply, steps.ToImmutable(), RunningAmps(volts), dip, gap);
+            var below = single && (f.Transformer is not null || supply.BelowSinglePhaseTransformer);
+            var bus = new FaultPoint(Name(f), volts, z, supply, steps.ToImmutable(), RunningAmps(volts), dip, gap, single, below);
             return new FeederFault(f, supply, bus, transformer);
         }
+
+        private static Impedance Twice(Impedance z) => new(2 * z.R, 2 * z.X);
 
         private FeederFault WithTransformerFacts(FeederFault fault, TransformerFacts? facts) => fault with { Transformer = facts ?? TransformerOf(fault.Feeder) };
 
@@ -367,7 +390,9 @@ public sealed class FaultStudy
             if (at.WithMotors.Value is not { } available || at.Bolted.Value is not { } bolted) return;
             var amps = rating.Value.Value * 1000m;
             if (amps >= available) return;
-            var message = $"{what} {Format.Number(rating.Value.Value)} kA is below the {FaultCurrent.KiloAmps(available)} available at {at.Name} "
+            var message = at.BelowSinglePhaseTransformer
+                ? $"{what} {Format.Number(rating.Value.Value)} kA is below the {FaultCurrent.KiloAmps(available)} {at.Name} is held to: {Format.Number(FaultCurrent.LineToNeutralMultiple)} × its {FaultCurrent.KiloAmps(bolted)} line-to-line fault current as a line-to-neutral bound, plus the motors' share ({rule})"
+                : $"{what} {Format.Number(rating.Value.Value)} kA is below the {FaultCurrent.KiloAmps(available)} available at {at.Name} "
                           + (amps >= bolted
                               ? $"with the motors' contribution ({FaultCurrent.KiloAmps(bolted)} from the source alone; the motor share ≈ 4 × FLC is an approximation)"
                               : $"({FaultCurrent.KiloAmps(bolted)} from the source alone)")

@@ -94,8 +94,48 @@ public static class FaultCurrent
                 $"{Method}: I = {Format.Number(volts)} V ÷ (√3 × {Impedance.Ohms(magnitude)} Ω) = {Format.Amps(decimal.Round(amps))}"));
     }
 
+    /// <summary>
+    /// The single-phase line-to-line bolted fault current at a point: I = V ÷ |Z|, where Z is the
+    /// loop impedance (out and back) from the source to the point, referred to the point's voltage.
+    /// </summary>
+    public static Result<decimal> BoltedLineToLine(string point, decimal volts, Impedance loop)
+    {
+        var magnitude = loop.Magnitude;
+        if (magnitude == 0)
+            return Result<decimal>.Missing("no impedance between an infinite bus and this point: the fault current is unbounded; write the transformer or the utility's kA");
+        var amps = volts / magnitude;
+        var xr = loop.XOverR is { } k ? Format.Number(k) : "no resistance (pure reactance)";
+        return Result<decimal>.Of(amps,
+            new Step("Loop impedance to the fault", $"{loop} (|Z| {Impedance.Ohms(magnitude)} Ω, X/R {xr})", MethodReference,
+                $"out and back: everything between the source and {point}, referred to {Format.Number(volts)} V"),
+            new Step("Single-phase line-to-line bolted fault current", KiloAmps(amps), MethodReference,
+                $"{Method}: I = {Format.Number(volts)} V ÷ {Impedance.Ohms(magnitude)} Ω = {Format.Amps(decimal.Round(amps))}"));
+    }
+
+    /// <summary>
+    /// A single-phase transformer's secondary may be center-tapped, and its line-to-neutral fault at the
+    /// terminals can reach about 1.5 × the line-to-line value (the point-to-point method's multiplier,
+    /// from memory). The list does not say whether there is a neutral, so ratings below a single-phase
+    /// transformer are held to this bound: the conservative reading.
+    /// </summary>
+    public const decimal LineToNeutralMultiple = 1.5m;
+
     /// <summary>Induction motors feed a fault for the first cycles: about 4 × their full-load current. An approximation (common practice, no source).</summary>
     public const decimal MotorContributionMultiple = 4m;
+
+    /// <summary>Below a single-phase transformer: the motors' share on top of the line-to-neutral bound (1.5 × the line-to-line value).</summary>
+    public static Result<decimal> MotorContributionBelowSinglePhase(decimal runningFullLoadAmps, decimal lineToLineAmps)
+    {
+        var bound = LineToNeutralMultiple * lineToLineAmps;
+        var motors = MotorContributionMultiple * runningFullLoadAmps;
+        return Result<decimal>.Of(bound + motors,
+            new Step("Line-to-neutral bound", KiloAmps(bound), "point-to-point method (from memory); conservative reading",
+                $"{Format.Number(LineToNeutralMultiple)} × {KiloAmps(lineToLineAmps)}: a center-tapped secondary's line-to-neutral fault can reach this, and the list does not say whether there is a neutral"),
+            new Step("Motor contribution (approximation)", KiloAmps(motors), "common practice, no source",
+                $"≈ 4 × {Format.Amps(runningFullLoadAmps)} full-load current of the running motors; an approximation, shown apart"),
+            new Step("Fault current the ratings are held to", KiloAmps(bound + motors), "conservative reading",
+                $"{KiloAmps(bound)} + {KiloAmps(motors)} from the motors"));
+    }
 
     public static Result<decimal> MotorContribution(decimal runningFullLoadAmps, decimal boltedAmps)
     {
