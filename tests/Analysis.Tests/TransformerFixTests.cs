@@ -39,4 +39,14 @@ public class TransformerFixTests
         Assert.Equal("Change the secondary conductors to 4/0 AWG", f.Fix!.Title);
         Assert.Equal("4/0 AWG", f.Fix.Edits.Single().NewText);
     }
+
+    [Fact]
+    public void ATransformerLoadedBeyondItsRatingIsWarned()
+    {
+        // 75 kVA at 208 V three-phase: 75,000 ÷ (√3 × 208) = 208.18 A rated secondary current; 250 A of load is above it.
+        var over = Transformer("load L-1 250A");
+        var f = One(over, FindingCodes.TransformerOverloaded);
+        Assert.Contains("208.2 A", f.Message);
+        Assert.DoesNotContain(Transformer("load L-1 200A").Findings, x => x.Code == FindingCodes.TransformerOverloaded);
+    }
 }

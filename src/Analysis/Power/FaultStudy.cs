@@ -330,6 +330,11 @@ public sealed class FaultStudy
                     $"transformer {Format.Number(vp.Value.Value)} V to {Format.Number(vs.Value.Value)} V, but it is supplied at {Format.Number(fault.Supply.Volts)} V and the feeder is {Format.Number(fv.Value.Value)} V; the fault current below it is not worked out"));
             }
 
+            // The supplying feeder counts the transformer at its rated primary current (M216), which holds only while its load stays within its rating.
+            if (fault.Transformer is { } rated && f.TransformerRating is { } kva && _sized.GetValueOrDefault(f) is { CalculatedLoad: > 0 } sized
+                && sized.CalculatedLoad > rated.SecondaryAmps)
+                Findings.Add(new Finding(FindingCodes.TransformerOverloaded, Parser.Diagnostics.Severity.Warning, kva.Range,
+                    $"{tag}'s running load of {Format.Amps(sized.CalculatedLoad)} is above its {Format.Number(rated.Kva)} kVA transformer's {Format.Amps(decimal.Round(rated.SecondaryAmps, 1))} rated secondary current; the feeder it is supplied from counts it at its rating only"));
             if (fault.Transformer is not { Method: { } method } t) return;
             if (t.PrimaryMaximum?.Value is { } pmax && f.PrimaryProtectionRating is { } pr && pr.Value.Value > pmax)
                 Findings.Add(new Finding(FindingCodes.TransformerPrimaryTooLarge, Parser.Diagnostics.Severity.Error, pr.Range,

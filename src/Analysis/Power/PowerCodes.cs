@@ -39,4 +39,6 @@ public static partial class FindingCodes
     public const string StartingDipAtMotorHigh = "M516";
     /// <summary>The starting dip at the motor's feeder bus is above the 'dip-limit' for the bus (10 % when not written).</summary>
     public const string StartingDipAtBusHigh = "M517";
+    /// <summary>A transformer feeder's running load is above the transformer's rated secondary current.</summary>
+    public const string TransformerOverloaded = "M518";
 }
