@@ -228,4 +228,35 @@ public class GroupCircuitFindingTests
         Assert.Single(large, f => f.Code == FindingCodes.CombinedDeviceTooLarge);
         Assert.DoesNotContain(large, f => f.Code == FindingCodes.ProtectionTooLarge);
     }
+
+    // 430.53(B): the 5 hp motor's 430.52 maximum is 250 % x 7.6 = 19 -> 20 A (430.52(C)(1)(a)); the
+    // circuit may have no more, although the 10 hp motor alone would allow 35 A.
+    [Fact]
+    public void M160_SmallestProtected()
+    {
+        var text = Listed("25A").Replace("branch-group listed-group", "branch-group smallest-protected");
+        var f = Single(text, FindingCodes.GroupProtectionTooLarge);
+        Assert.Contains("430.53(B)", f.Message);
+        Assert.Contains("protection inverse-time-breaker 20A", ApplyFix(text, f));
+    }
+
+    // A motor-compressor on a group circuit: Article 440 governs (440.22(B)), so the device is not checked (M210), never passed.
+    [Fact]
+    public void CompressorOnAGroupIsNotChecked()
+    {
+        var text = Listed("50A") + "  compressor RTU-1 460V\n    rated-load 10A\n";
+        var findings = Analyzer.Analyze(text).Findings;
+        Assert.Contains(findings, f => f.Code == FindingCodes.OutsideScope && f.Message.Contains("440.22(B)"));
+        Assert.DoesNotContain(findings, f => f.Code == FindingCodes.GroupProtectionTooLarge);
+    }
+
+    // A fire pump supply counts every motor: no interlock reduction (695.6(C) sizes it for all it carries).
+    [Fact]
+    public void NoInterlockOnAFirePumpSupply()
+    {
+        var text = Pumps() + "  motor FP-1 50hp\n    fire-service pump\n";
+        var analysis = Analyzer.Analyze(text);
+        Assert.Contains(analysis.Findings, f => f.Code == FindingCodes.CannotCheck && f.Message.Contains("fire pump"));
+        Assert.DoesNotContain(analysis.Feeders.Values.Single().RequiredAmpacity!.Steps, s => s.Rule == "NEC 430.24 Exception No. 3");
+    }
 }

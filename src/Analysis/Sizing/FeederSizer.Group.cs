@@ -23,6 +23,14 @@ internal sealed partial class FeederSizer
         var interlocked = carried.Interlocked is { } list && list.GroupBy(m => m.Interlock, StringComparer.OrdinalIgnoreCase)
             .Any(g => g.Select(m => m.Set).Distinct(StringComparer.OrdinalIgnoreCase).Count() > 1) ? list : null;
         if ((interlocked is null && demand is null) || required.Value is not { } total) return required;
+        if (carried.FirePump)
+        {
+            // A fire pump's supply is sized for everything it carries (695.6(C), 695.4(B)): no motor is left out of it.
+            Add(FindingCodes.CannotCheck, Severity.Warning, (demand?.Range ?? feeder.Header.KeywordToken.Range),
+                "the feeder supplies a fire pump: interlocks (NEC 430.24 Exception No. 3) and demand factors (430.26) are not applied to it, and every motor is counted");
+            return required;
+        }
+
         var loads = totals.NonContinuousLoadAmps + totals.ContinuousLoadAmps * 1.25m;
         var motorsAll = total - loads;
         var motors = motorsAll;
@@ -58,6 +66,14 @@ internal sealed partial class FeederSizer
         {
             Add(FindingCodes.GroupNotPermitted, Severity.Error, written.Range,
                 $"a branch circuit supplying several motors is protected by fuses or an inverse-time breaker (NEC 430.53); a {ShortCircuitProtection.DeviceName(written.Value)} is not permitted");
+            return;
+        }
+
+        if (feeder.Motors.FirstOrDefault(m => m.IsCompressor) is { } compressor)
+        {
+            Add(FindingCodes.OutsideScope, Severity.Warning, line.Range,
+                $"a motor-compressor ({compressor.Tag?.Value}) is on the circuit: Article 440 sets the rules for compressors sharing a circuit (440.22(B)), which MotorLang does not work out, so the branch device is not checked");
+            r.MaximumProtection = Result<decimal>.Missing("a motor-compressor is on the circuit (440.22(B) is not worked out)");
             return;
         }
 
