@@ -87,6 +87,15 @@ public class GroupCircuitFindingTests
         Assert.Contains("disconnect 30A 1-1/2hp", ApplyFix(text, f));
     }
 
+    // A kW rating: 0.75 kW / 0.746 = 1.005 hp, under the 1-1/2 hp equivalent (common practice, no source, for the conversion).
+    [Fact]
+    public void M163_GroupDisconnectInKilowatts()
+    {
+        var f = Single(Fans(disconnect: "30A 0.75kW"), FindingCodes.GroupDisconnectTooSmall);
+        Assert.Contains("0.75 kW", f.Message);
+        Assert.Empty(Analyzer.Analyze(Fans(disconnect: "30A 1.5kW")).Findings.Where(x => x.Code == FindingCodes.GroupDisconnectTooSmall));
+    }
+
     // 430.110(C)(2): 115 % x 11.6 A = 13.34 A; a 10 A switch is too small, the fix writes 15 A.
     [Fact]
     public void M163_GroupDisconnectAmpereRating()

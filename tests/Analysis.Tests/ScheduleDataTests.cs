@@ -37,6 +37,22 @@ public class ScheduleDataTests
         Assert.Equal((null, null, null), (tc.ControlConductorLimit, tc.ControlPrimaryLimit, tc.OverloadUnitsRequired));
     }
 
+    // examples/laundry-plant.motors: the group circuit's permission and its 430.110(C) disconnect
+    // (29.2 A -> 25 hp, 115 % = 33.58 A; see ExampleScheduleTests), the demand-free MCC, and a tap's
+    // 430.53(D)(2) one third of the 8 AWG circuit (50 A at 75 C): 16.67 A.
+    [Fact]
+    public void GroupCircuitRowsSayWhatProtectsThem()
+    {
+        var data = ScheduleDataBuilder.Of(Analyzer.Analyze(Example("laundry-plant.motors")));
+        var group = data.Feeders.Single(f => f.Tag == "CV-G");
+        Assert.Equal(("listed-group", new Measure(25, "hp"), new Measure(33.58m, "A")), (group.BranchGroup, group.DisconnectMinimumPower, group.DisconnectMinimumCurrent));
+        Assert.Null(data.Feeders.Single(f => f.Tag == "MCC-W").BranchGroup);
+        var tap = data.Motors.Single(m => m.Tag == "CV-2");
+        Assert.Equal("CV-G", tap.ProtectedBy);
+        Assert.Equal(16.67m, decimal.Round(tap.TapRequiredAmpacity!.Value.Value, 2));
+        Assert.Null(data.Motors.Single(m => m.Tag == "FD-1").ProtectedBy);
+    }
+
     [Fact]
     public void DairyMotorRowHoldsNumbersWithUnits()
     {

@@ -83,6 +83,7 @@ public sealed class ScheduleDataFormatTests : IDisposable
     [InlineData("cold-storage.motors")]
     [InlineData("press-line.motors")]
     [InlineData("orchard-packhouse.motors")]
+    [InlineData("laundry-plant.motors")]
     public void JsonValidatesAgainstItsSchema(string example)
     {
         var json = Json(example);

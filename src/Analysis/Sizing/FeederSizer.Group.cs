@@ -148,9 +148,12 @@ internal sealed partial class FeederSizer
             Add(FindingCodes.GroupDisconnectTooSmall, Severity.Error, rating.Range,
                 $"the disconnect's {Format.Amps(rating.Value.Value)} is under the {Format.Amps(need.MinimumAmps)} NEC 430.110(C)(2) asks (115 % of the summed {Format.Amps(fullLoad)})",
                 amps is { } a ? new Fix($"Change the rating to {Format.Number(a)}A", [EditBuilder.Replace(line.Arg("rating")!, $"{Format.Number(a)}A")]) : null);
-        if (feeder.DisconnectPower is { } power && power.Value.Value < need.MinimumHorsepower)
+        // A kW rating is compared at 0.746 kW per hp (common practice, no source), as a motor's disconnect is.
+        if (feeder.DisconnectPower is { } power && HorsepowerOf(power.Value) < need.MinimumHorsepower)
             Add(FindingCodes.GroupDisconnectTooSmall, Severity.Error, power.Range,
-                $"the disconnect's {Numbers.Horsepower(power.Value.Value)} hp is under the {Numbers.Horsepower(need.MinimumHorsepower)} hp equivalent of the combined load (NEC 430.110(C)(1), Table 430.251)",
+                $"the disconnect's {Parser.Values.Quantity.Number(power.Value.Value)} {(power.Value.Unit == Parser.Values.Unit.Kw ? "kW" : "hp")} is under the {Numbers.Horsepower(need.MinimumHorsepower)} hp equivalent of the combined load (NEC 430.110(C)(1), Table 430.251)",
                 new Fix($"Change the rating to {Numbers.Horsepower(need.MinimumHorsepower)}hp", [EditBuilder.Replace(line.Arg("power")!, $"{Numbers.Horsepower(need.MinimumHorsepower)}hp")]));
     }
+
+    private static decimal HorsepowerOf(Parser.Values.Quantity q) => q.Unit == Parser.Values.Unit.Kw ? q.Value / MotorCurrent.KilowattsPerHorsepower : q.Value;
 }

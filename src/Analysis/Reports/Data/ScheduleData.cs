@@ -95,6 +95,10 @@ public sealed record MotorData
     public Measure? Protection { get; init; }
     public Measure? OverloadLimit { get; init; }
     public Measure? Overload { get; init; }
+    /// <summary>The circuit whose device protects this motor when it is on a branch circuit supplying several motors (430.53) with no device of its own; null otherwise.</summary>
+    public string? ProtectedBy { get; init; }
+    /// <summary>What the motor's conductors must carry as a tap from that circuit (430.53(D)); null when not a tap.</summary>
+    public Measure? TapRequiredAmpacity { get; init; }
     public Measure? DisconnectMinimumCurrent { get; init; }
     public Measure? DisconnectMinimumPower { get; init; }
     /// <summary>NEMA starter size for the motor's horsepower (ICS 2), when the table has it.</summary>
@@ -162,6 +166,13 @@ public sealed record FeederData
     /// <summary>X/R of the impedance from the source to the bus; null where it has no resistance or nothing was worked out.</summary>
     public decimal? FaultXOverR { get; init; }
     public bool SuppliesFirePump { get; init; }
+    /// <summary>The 430.53 permission of a branch circuit supplying several motors ('branch-group'): small-motors, smallest-protected or listed-group; null for a feeder.</summary>
+    public string? BranchGroup { get; init; }
+    /// <summary>A 430.26 demand factor applied by the authority's written permission; null when none.</summary>
+    public Measure? DemandFactor { get; init; }
+    /// <summary>A written disconnect serving everything the block supplies: the 430.110(C) ampere and horsepower minimums; null when none is written or it could not be sized.</summary>
+    public Measure? DisconnectMinimumCurrent { get; init; }
+    public Measure? DisconnectMinimumPower { get; init; }
     public string Status { get; init; } = "ok";
     public IReadOnlyList<RowFinding> Findings { get; init; } = [];
     public IReadOnlyList<NotComputed> NotComputed { get; init; } = [];
