@@ -78,6 +78,8 @@ public class ExampleScheduleTests
         Assert.Equal(33.58m, group.Disconnect.Value.Value.MinimumAmps);
         // CV-2's 20 ft tap: one third of 50 A (430.53(D)(2)).
         Assert.Equal(50m / 3m, a.Motors.Values.Single(m => m.Tag == "CV-2").TapAmpacity!.Value);
+        // Its own 430.52 maximum is no limit on a device it does not have: the schedule names the circuit's instead.
+        Assert.Equal("by CV-G", Row(a, "CV-2").MaximumProtection);
 
         // BC-12, 430.53(A): 20 A at 120 V; 430.24: 125 % x 5.8 + 5.8 = 13.05 A (Table 430.248, 115 V column).
         var fans = a.Feeders.Values.Single(f => f.Tag == "BC-12");

@@ -114,6 +114,7 @@ public sealed record Schedule(IReadOnlyList<ScheduleRow> Rows, IReadOnlyList<Fee
     private static string FaultCurrentText(decimal amps) => MotorLang.Sizing.Rules.Faults.FaultCurrent.KiloAmps(amps);
 
     private static string Protection(MotorResult m) =>
+        m.ProtectedByGroup ? $"by {m.Motor.Feeder.Tag?.Value}" :
         m.FirePumpMinimumProtection?.Value is { } min ? $"≥ {Format.Amps(min)} {Short(m.Device)}" :
         m.MaximumProtection?.Value is { } max ? $"{Format.Amps(ShortCircuitProtection.IsSetting(m.Device) ? decimal.Floor(max) : max)} {Short(m.Device)}" : "";
 

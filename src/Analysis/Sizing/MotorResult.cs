@@ -36,6 +36,8 @@ public sealed class MotorResult(MotorNode motor)
     public Result<decimal> FullLoadCurrent { get; internal set; } = Result<decimal>.Missing("not computed");
     public Result<decimal>? RequiredAmpacity { get; internal set; }
     public Result<WireSpec>? MinimumWire { get; internal set; }
+    /// <summary>The motor has no device of its own on a circuit supplying several motors: the circuit's device protects it (430.53).</summary>
+    public bool ProtectedByGroup { get; internal set; }
     /// <summary>What the motor's conductors must carry as a tap from a circuit supplying several motors (430.53(D)).</summary>
     public Result<decimal>? TapAmpacity { get; internal set; }
     public WireSpec? Wire { get; internal set; }

@@ -23,6 +23,7 @@ internal sealed partial class MotorSizer
     {
         var kind = motor.Feeder.BranchGroup!.Value;
         var rule = kind switch { BranchGroupKind.SmallMotors => "NEC 430.53(A)", BranchGroupKind.SmallestProtected => "NEC 430.53(B)", _ => "NEC 430.53(C), 430.53(D)" };
+        r.ProtectedByGroup = true;
         var steps = r.MaximumProtection?.Steps ?? [];
         r.MaximumProtection = new Result<decimal>(r.MaximumProtection?.Value,
             [.. steps, new Step("Protected by", $"{motor.Feeder.Tag?.Value}", rule,

@@ -28,7 +28,7 @@ public static class ScheduleTable
         "ITB = inverse-time breaker; inst. = instantaneous-trip breaker; DE fuse = dual-element (time-delay) fuse; NTD fuse = non-time-delay fuse; ×N = N identical motors.",
         "Voltage drop = running drop on the branch (and, in brackets, with the feeder's); Status = the error codes on the motor, 'warnings', or 'ok'.",
         "Feeders: Load = the calculated load of its motors and other loads (430.24); Required = the ampacity its conductors need.",
-        "Feeders: Load = the calculated load of its motors and other loads (430.24); Required = the ampacity its conductors need.",
+        "Max protection \"by TAG\" = a motor with no device of its own on a branch circuit supplying several motors: that circuit's device protects it (430.53).",
     ];
 
     /// <summary>Under a table with the fault current column.</summary>

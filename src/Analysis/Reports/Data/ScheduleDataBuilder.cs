@@ -92,7 +92,7 @@ public static class ScheduleDataBuilder
             Protection = Measure.Of(m.ProtectionRating, Measure.Amps),
             OverloadLimit = Measure.Of(Value(m.OverloadLimit, "overloadLimit", missing), Measure.Amps),
             Overload = Measure.Of(m.Overload, Measure.Amps),
-            ProtectedBy = node.Feeder.BranchGroup is not null && Likes.Get(node, model, n => n.Protection) is null ? node.Feeder.Tag?.Value : null,
+            ProtectedBy = m.ProtectedByGroup ? node.Feeder.Tag?.Value : null,
             TapRequiredAmpacity = Measure.Of(Value(m.TapAmpacity, "tapRequiredAmpacity", missing), Measure.Amps),
             DisconnectMinimumCurrent = Measure.Of(disconnect?.MinimumAmps, Measure.Amps),
             DisconnectMinimumPower = Measure.Of(disconnect?.MinimumHorsepower, Measure.Horsepower),
