@@ -21,6 +21,17 @@ public class FeederTapTests
 
     private static List<Finding> Tap(AnalysisResult a) => a.Findings.Where(f => string.CompareOrdinal(f.Code, "M510") >= 0 && string.CompareOrdinal(f.Code, "M519") <= 0).ToList();
 
+    // A termination rating that is no column of Table 310.16 (a typo, 8 °C): the list is still
+    // analysed, and the tap is reported as not checked rather than the analysis failing.
+    [Fact]
+    public void ATerminationRatingThatIsNoColumnLeavesTheTapUncheckedAndTheListAnalysed()
+    {
+        var a = Analyzer.Analyze(List("tap 8ft 6 AWG").Replace("conductor cu THWN 75C", "conductor cu THWN 8C"));
+        var tap = a.Power.Taps.Values.Single();
+        Assert.NotEqual(true, tap.Check?.Passes);
+        Assert.Contains(a.Findings, f => f.Code == "M514");
+    }
+
     [Fact]
     public void ATenFootTapWithinTheRulesIsClean()
     {

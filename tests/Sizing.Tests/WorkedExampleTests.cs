@@ -117,6 +117,19 @@ public class WorkedExampleTests
 
     // 110.14(C)(1)(a): unmarked terminations on a 14-1 AWG circuit are 60 C, except design B/C/D motors (75 C).
     // Hand calculation: 10 AWG Cu THHN, unmarked -> 30 A; for a design B motor -> 35 A.
+    // NFPA 70-2023 110.14(C), Table 310.16: the columns are 60, 75 and 90 C. A termination rating
+    // written as 8 C (a typo) or 105 C is none of them: no ampacity is given rather than a column guessed.
+    [Theory]
+    [InlineData(8)]
+    [InlineData(105)]
+    public void ATerminationRatingThatIsNoColumnGivesNoAmpacity(int termination)
+    {
+        var r = Ampacity.Allowable(WireSpec.Single(ConductorSize.Parse("10")), new InstallationConditions(InsulationRating: 90, TerminationRating: termination));
+        Assert.Null(r.Value);
+        Assert.Contains("not a column of Table 310.16", r.Unavailable);
+        Assert.Null(Ampacity.AllowableAmps(WireSpec.Single(ConductorSize.Parse("10")), new InstallationConditions(InsulationRating: 75, TerminationRating: termination)));
+    }
+
     [Fact]
     public void UnmarkedTerminationsDependOnTheDesignLetter()
     {

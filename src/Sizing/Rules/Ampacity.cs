@@ -47,6 +47,11 @@ public static class Ampacity
 
         var corrected = baseAmps.Value * ambient.Value * adjustment;
         var termination = TerminationRating(wire.Size, c, designBcdMotor, out var terminationRule);
+        // A written termination rating that is no column of the table (8 °C, 105 °C) names no limit
+        // the code gives: nothing is worked out rather than a column guessed.
+        if (termination is not (60 or 75 or 90))
+            return steps is null ? Result<decimal>.Missing("") : Result<decimal>.Missing(
+                $"a termination rating of {termination} °C is not a column of Table 310.16 (60, 75 or 90 °C), so the 110.14(C) limit is unknown", [.. steps]);
         var limitColumn = Math.Min(termination, insulation);
         var limit = CsvTable.Number(row![CodeTables.Ampacity.Column($"{material}{limitColumn}")]);
         var perSet = limit is { } l && l < corrected ? l : corrected;
